@@ -1,0 +1,38 @@
+import { sql } from 'drizzle-orm';
+import {
+  doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, uuid,
+} from 'drizzle-orm/pg-core';
+import { tenants } from './tenancy.ts';
+import { tenantIsolation } from './rls.ts';
+
+/** Opening hours per ISO weekday (1 = Monday … 7 = Sunday), "HH:MM" local time; close may pass midnight. */
+export type OpeningHours = Partial<Record<'1' | '2' | '3' | '4' | '5' | '6' | '7', { open: string; close: string }[]>>;
+
+export const venues = pgTable(
+  'venues',
+  {
+    tenantId: uuid('tenant_id').notNull().references(() => tenants.id, { onDelete: 'cascade' }),
+    id: uuid('id').notNull().defaultRandom(),
+    name: text('name').notNull(),
+    addressLine: text('address_line').notNull(),
+    city: text('city').notNull(),
+    postcode: text('postcode').notNull().default(''),
+    latitude: doublePrecision('latitude').notNull(),
+    longitude: doublePrecision('longitude').notNull(),
+    openingHours: jsonb('opening_hours').$type<OpeningHours>().notNull().default({}),
+    contactName: text('contact_name').notNull().default(''),
+    contactPhone: text('contact_phone').notNull().default(''),
+    contactEmail: text('contact_email').notNull().default(''),
+    notes: text('notes').notNull().default(''),
+    version: integer('version').notNull().default(1),
+    createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
+    updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
+    retiredAt: timestamp('retired_at', { withTimezone: true }),
+  },
+  (t) => [
+    primaryKey({ columns: [t.tenantId, t.id] }),
+    index('venues_tenant_name_idx').on(t.tenantId, sql`lower(${t.name})`, t.id),
+    index('venues_tenant_created_idx').on(t.tenantId, t.createdAt, t.id),
+    tenantIsolation(t.tenantId),
+  ],
+).enableRLS();
