@@ -1,10 +1,12 @@
 CREATE TYPE "public"."game_kind" AS ENUM('pinball', 'video', 'jukebox', 'darts', 'other');--> statement-breakpoint
 CREATE TYPE "public"."game_status" AS ENUM('running', 'attention', 'down', 'in_shop');--> statement-breakpoint
 CREATE TYPE "public"."member_role" AS ENUM('owner', 'dispatcher', 'technician', 'venue_contact');--> statement-breakpoint
-CREATE TABLE "password_reset_tokens" (
+CREATE TABLE "email_tokens" (
 	"token_hash" text PRIMARY KEY NOT NULL,
+	"purpose" text NOT NULL,
 	"user_id" uuid NOT NULL,
 	"expires_at" timestamp with time zone NOT NULL,
+	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
 	"used_at" timestamp with time zone
 );
 --> statement-breakpoint
@@ -130,7 +132,7 @@ CREATE TABLE "audit_log" (
 );
 --> statement-breakpoint
 ALTER TABLE "audit_log" ENABLE ROW LEVEL SECURITY;--> statement-breakpoint
-ALTER TABLE "password_reset_tokens" ADD CONSTRAINT "password_reset_tokens_user_id_users_id_fk" FOREIGN KEY ("user_id") REFERENCES "public"."users"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
+ALTER TABLE "email_tokens" ADD CONSTRAINT "email_tokens_user_id_users_id_fk" FOREIGN KEY ("user_id") REFERENCES "public"."users"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "platform_admins" ADD CONSTRAINT "platform_admins_user_id_users_id_fk" FOREIGN KEY ("user_id") REFERENCES "public"."users"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "user_sessions" ADD CONSTRAINT "user_sessions_user_id_users_id_fk" FOREIGN KEY ("user_id") REFERENCES "public"."users"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint
 ALTER TABLE "invitations" ADD CONSTRAINT "invitations_tenant_id_tenants_id_fk" FOREIGN KEY ("tenant_id") REFERENCES "public"."tenants"("id") ON DELETE cascade ON UPDATE no action;--> statement-breakpoint

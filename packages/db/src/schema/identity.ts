@@ -29,10 +29,13 @@ export const userSessions = pgTable(
   (t) => [index('user_sessions_user_idx').on(t.userId)],
 );
 
-export const passwordResetTokens = pgTable('password_reset_tokens', {
+/** One-time e-mailed tokens: password resets and sign-in links (venue contacts sign in without a password). */
+export const emailTokens = pgTable('email_tokens', {
   tokenHash: text('token_hash').primaryKey(),
+  purpose: text('purpose', { enum: ['password-reset', 'sign-in'] }).notNull(),
   userId: uuid('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
   expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
+  createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   usedAt: timestamp('used_at', { withTimezone: true }),
 });
 

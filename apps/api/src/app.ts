@@ -1,0 +1,116 @@
+// Builds the Express app from its dependencies; listening happens in main.ts, so tests get the app.
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import helmet from 'helmet';
+import { pinoHttp } from 'pino-http';
+import type { Logger } from 'pino';
+import { ExpressAuth } from '@auth/express';
+import type { Db } from '@bumperline/db/client';
+import type { MailFake } from '@bumperline/fakes/mail/mail-fake';
+import { InvalidCursorError } from '@bumperline/db/queries/keyset';
+import { buildAuthConfig } from './auth/auth-config.ts';
+import { loadActor } from './auth/load-actor.ts';
+import { SignInLimiter } from './auth/sign-in-limiter.ts';
+import { csrfGuard } from './http/csrf.ts';
+import { makeScoped } from './http/guards.ts';
+import { notFoundHandler, problemHandler } from './http/problem-details.ts';
+import { ValidationError } from './http/errors.ts';
+import type { Mailer } from './services/mailer.ts';
+import { accountRouter } from './routes/account.ts';
+import { activityRouter, companyRouter } from './routes/company.ts';
+import { devRouter } from './routes/dev.ts';
+import { gamesRouter, modelsRouter } from './routes/games.ts';
+import { healthRouter } from './routes/health.ts';
+import { invitationsRouter, teamRouter } from './routes/team.ts';
+import { venuesRouter } from './routes/venues.ts';
+
+export interface AppDeps {
+  db: Db;
+  mailer: Mailer;
+  logger: Logger;
+  authSecret: string;
+  appOrigin: string;
+  /** Present while fakes stand in for hosted services: mounts the /dev pages. */
+  mailFake?: MailFake;
+  /** The built web app (vite build) to serve, in production. */
+  webDist?: string;
+  signInLimiter?: SignInLimiter;
+}
+
+export function createApp(deps: AppDeps): Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.set('query parser', 'simple');
+  app.use(
+    pinoHttp({
+      logger: deps.logger,
+      genReqId: (req, res) => {
+        const id = (req.headers['x-request-id'] as string | undefined) ?? crypto.randomUUID();
+        res.setHeader('x-request-id', id);
+        return id;
+      },
+      redact: ['req.headers.cookie', 'req.headers.authorization', 'res.headers["set-cookie"]'],
+      autoLogging: { ignore: (req) => req.url === '/api/health' },
+    }),
+  );
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'img-src': ["'self'", 'data:', 'blob:', 'https:'],
+          'connect-src': ["'self'"],
+          'upgrade-insecure-requests': null,
+        },
+      },
+    }),
+  );
+
+  const authConfig = buildAuthConfig({
+    db: deps.db,
+    secret: deps.authSecret,
+    secureCookies: deps.appOrigin.startsWith('https:'),
+    limiter: deps.signInLimiter ?? new SignInLimiter(),
+  });
+  // Auth.js reads the client address from this header for rate limiting; never trust the client's own.
+  app.use('/auth', (req, _res, next) => {
+    req.headers['x-bumperline-client-ip'] = req.ip ?? 'unknown';
+    next();
+  });
+  app.use('/auth', ExpressAuth(authConfig));
+
+  app.use(express.json({ limit: '100kb' }));
+  app.use(loadActor(deps.db, authConfig));
+
+  const scoped = makeScoped(deps.db);
+  const api = express.Router();
+  api.use('/health', healthRouter(deps.db));
+  api.use(csrfGuard(deps.appOrigin));
+  api.use('/account', accountRouter({ db: deps.db, mailer: deps.mailer, appOrigin: deps.appOrigin }));
+  api.use('/invitations', invitationsRouter(deps.db));
+  api.use('/company', companyRouter(scoped));
+  api.use('/activity', activityRouter(scoped));
+  api.use('/team', teamRouter({ scoped, mailer: deps.mailer, appOrigin: deps.appOrigin }));
+  api.use('/venues', venuesRouter(scoped));
+  api.use('/games', gamesRouter(scoped));
+  api.use('/models', modelsRouter(scoped));
+  api.use(notFoundHandler);
+  app.use('/api', api);
+
+  if (deps.mailFake) app.use('/dev', devRouter(deps.mailFake));
+
+  if (deps.webDist && existsSync(path.join(deps.webDist, 'index.html'))) {
+    const index = path.join(deps.webDist, 'index.html');
+    app.use(express.static(deps.webDist, { index: false, maxAge: '1h' }));
+    // Client-side routes: every other GET gets the app shell.
+    app.get('/{*path}', (_req, res) => res.sendFile(index));
+  }
+
+  app.use(notFoundHandler);
+  app.use(((err, req, res, next) => {
+    if (err instanceof InvalidCursorError) return problemHandler(new ValidationError([{ field: 'cursor', message: err.message }]), req, res, next);
+    return problemHandler(err, req, res, next);
+  }) as express.ErrorRequestHandler);
+  return app;
+}

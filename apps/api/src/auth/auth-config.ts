@@ -1,0 +1,85 @@
+// Auth.js for Express. Credentials sign-in needs JWT sessions, so the token carries only the id of a
+// row in user_sessions; each request loads that row (and the person's memberships) from the database,
+// which is what makes sign-out and removal from a company take effect at once.
+import type { ExpressAuthConfig } from '@auth/express';
+import Credentials from '@auth/express/providers/credentials';
+import { and, eq, gt, isNull } from 'drizzle-orm';
+import type { Db } from '@bumperline/db/client';
+import { createSession, findUserByEmail, revokeSession } from '@bumperline/db/queries/identity';
+import { verifyPassword } from '@bumperline/db/passwords';
+import { emailTokens, users } from '@bumperline/db/schema/index';
+import { hashToken } from './tokens.ts';
+import type { SignInLimiter } from './sign-in-limiter.ts';
+
+
+export function buildAuthConfig(opts: { db: Db; secret: string; secureCookies: boolean; limiter: SignInLimiter }): ExpressAuthConfig {
+  const { db, limiter } = opts;
+  return {
+    secret: opts.secret,
+    trustHost: true,
+    basePath: '/auth',
+    useSecureCookies: opts.secureCookies,
+    session: { strategy: 'jwt', maxAge: 30 * 24 * 3600 },
+    pages: { signIn: '/sign-in', error: '/sign-in' },
+    logger: { error: () => {}, warn: () => {}, debug: () => {} },
+    providers: [
+      Credentials({
+        id: 'credentials',
+        credentials: { email: {}, password: {} },
+        async authorize(raw, request) {
+          const email = typeof raw.email === 'string' ? raw.email.trim().toLowerCase() : '';
+          const password = typeof raw.password === 'string' ? raw.password : '';
+          const ip = request.headers.get('x-bumperline-client-ip') ?? 'unknown';
+          if (!email || !password || !limiter.allow(email, ip)) return null;
+          const user = await findUserByEmail(db, email);
+          const ok = await verifyPassword(user?.passwordHash, password);
+          if (!user || !ok) return null;
+          limiter.reset(email, ip);
+          return { id: user.id, email: user.email, name: user.name };
+        },
+      }),
+      // Venue contacts sign in by a one-time link e-mailed to them; the link page posts its token here.
+      Credentials({
+        id: 'email-link',
+        credentials: { token: {} },
+        async authorize(raw) {
+          const token = typeof raw.token === 'string' ? raw.token : '';
+          if (token.length < 20) return null;
+          const [used] = await db
+            .update(emailTokens)
+            .set({ usedAt: new Date() })
+            .where(
+              and(
+                eq(emailTokens.tokenHash, hashToken(token)),
+                eq(emailTokens.purpose, 'sign-in'),
+                isNull(emailTokens.usedAt),
+                gt(emailTokens.expiresAt, new Date()),
+              ),
+            )
+            .returning({ userId: emailTokens.userId });
+          if (!used) return null;
+          const [user] = await db.select().from(users).where(eq(users.id, used.userId));
+          return user ? { id: user.id, email: user.email, name: user.name } : null;
+        },
+      }),
+    ],
+    callbacks: {
+      async jwt({ token, user }) {
+        if (user?.id) {
+          token.sub = user.id;
+          token.sid = await createSession(db, user.id);
+        }
+        return token;
+      },
+      async session({ session, token }) {
+        return { ...session, sid: token.sid, userId: token.sub } as typeof session;
+      },
+    },
+    events: {
+      async signOut(message) {
+        const sid = 'token' in message ? message.token?.sid : undefined;
+        if (typeof sid === 'string') await revokeSession(db, sid);
+      },
+    },
+  };
+}

@@ -1,0 +1,55 @@
+// Route wrappers that check the signed-in person and their role (from the one permission table),
+// then run the handler in a transaction scoped to their company.
+import type { Request, RequestHandler, Response } from 'express';
+import { can, type Permission } from '@bumperline/contracts/roles';
+import { withScope, type Db, type Tx } from '@bumperline/db/client';
+import { ForbiddenError, UnauthorizedError } from './errors.ts';
+import type { Actor } from './context.ts';
+
+export type TenantActor = Actor & { tenantId: string; role: NonNullable<Actor['role']> };
+
+export interface ScopedContext {
+  tx: Tx;
+  actor: TenantActor;
+  req: Request;
+  res: Response;
+  /** Work that must wait until the transaction has committed (sending mail): never call a provider inside it. */
+  afterCommit(fn: () => Promise<void>): void;
+}
+
+export function requireActor(req: Request): Actor {
+  if (!req.actor) throw new UnauthorizedError();
+  return req.actor;
+}
+
+export function requirePermission(req: Request, permission: Permission): TenantActor {
+  const actor = requireActor(req);
+  if (!actor.tenantId || !actor.role) throw new ForbiddenError('You do not belong to an operator company yet.');
+  if (!can(actor.role, permission)) throw new ForbiddenError();
+  return actor as TenantActor;
+}
+
+/**
+ * A handler that needs `permission` in the current company. Whatever it returns is sent as JSON
+ * (with `status`), after its transaction has committed.
+ */
+export function makeScoped(db: Db) {
+  return function scoped<T>(
+    permission: Permission,
+    handler: (ctx: ScopedContext) => Promise<T>,
+    status = 200,
+  ): RequestHandler {
+    return async (req, res) => {
+      const actor = requirePermission(req, permission);
+      const later: (() => Promise<void>)[] = [];
+      const result = await withScope(db, { tenantId: actor.tenantId, userId: actor.userId }, (tx) =>
+        handler({ tx, actor, req, res, afterCommit: (fn) => later.push(fn) }),
+      );
+      for (const fn of later) await fn().catch((err: unknown) => req.log?.error({ err }, 'after-commit work failed'));
+      if (!res.headersSent) {
+        if (result === undefined) res.status(204).end();
+        else res.status(status).json(result);
+      }
+    };
+  };
+}

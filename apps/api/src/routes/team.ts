@@ -1,0 +1,156 @@
+// The company's people: members and their roles, invitations by e-mail, and accepting one.
+import { Router } from 'express';
+import { acceptInvitationInput, invitationInput, memberRoleUpdate } from '@bumperline/contracts/auth';
+import { roleLabels } from '@bumperline/contracts/roles';
+import { withScope, type Db } from '@bumperline/db/client';
+import {
+  addMember, countOwners, findInvitationByTokenHash, getMember, insertInvitation, listMembers,
+  listOpenInvitations, markInvitationAccepted, removeMember, revokeInvitation, setMemberRole,
+} from '@bumperline/db/queries/team';
+import { findUserByEmail, setActiveCompany } from '@bumperline/db/queries/identity';
+import { recordAudit } from '@bumperline/db/queries/audit';
+import { users } from '@bumperline/db/schema/index';
+import { hashPassword } from '@bumperline/db/passwords';
+import { ConflictError, HttpError, NotFoundError, ValidationError } from '../http/errors.ts';
+import type { makeScoped } from '../http/guards.ts';
+import { parse } from '../http/validate.ts';
+import { idParam } from '../http/params.ts';
+import { hashToken, newToken } from '../auth/tokens.ts';
+import type { Mailer } from '../services/mailer.ts';
+import { appLink } from '../services/links.ts';
+
+const INVITE_TTL_MS = 7 * 24 * 3600_000;
+
+export function teamRouter(deps: { scoped: ReturnType<typeof makeScoped>; mailer: Mailer; appOrigin: string }): Router {
+  const { scoped, mailer, appOrigin } = deps;
+  const r = Router();
+
+  r.get(
+    '/',
+    scoped('team:read', async ({ tx }) => ({ members: await listMembers(tx), invitations: await listOpenInvitations(tx) })),
+  );
+
+  r.post(
+    '/invitations',
+    scoped(
+      'team:manage',
+      async ({ tx, req, actor, afterCommit }) => {
+        const input = parse(invitationInput, req.body);
+        const { token, hash } = newToken();
+        const id = await insertInvitation(tx, {
+          email: input.email,
+          role: input.role,
+          tokenHash: hash,
+          invitedBy: actor.userId,
+          expiresAt: new Date(Date.now() + INVITE_TTL_MS),
+        });
+        await recordAudit(tx, { actorUserId: actor.userId, action: 'invite', entity: 'invitation', entityId: id, after: { email: input.email, role: input.role } });
+        const link = appLink(appOrigin, `/invitation?token=${token}`);
+        afterCommit(() =>
+          mailer.send({
+            to: input.email,
+            subject: `${actor.name} invited you to Bumperline`,
+            text: `${actor.name} invited you to join their operator company on Bumperline as ${roleLabels[input.role].toLowerCase()}.\n\nAccept here (valid for 7 days):\n${link}`,
+          }),
+        );
+        return { id, email: input.email, role: input.role };
+      },
+      201,
+    ),
+  );
+
+  r.delete(
+    '/invitations/:id',
+    scoped('team:manage', async ({ tx, req, actor }) => {
+      const id = idParam(req);
+      if (!(await revokeInvitation(tx, id))) throw new NotFoundError('open invitation');
+      await recordAudit(tx, { actorUserId: actor.userId, action: 'revoke', entity: 'invitation', entityId: id });
+      return undefined;
+    }),
+  );
+
+  r.patch(
+    '/members/:id',
+    scoped('team:manage', async ({ tx, req, actor }) => {
+      const userId = idParam(req);
+      const { role } = parse(memberRoleUpdate, req.body);
+      const member = await getMember(tx, userId);
+      if (!member) throw new NotFoundError('member');
+      if (member.role === 'owner' && role !== 'owner' && (await countOwners(tx)) <= 1) {
+        throw new ConflictError('A company needs at least one owner.');
+      }
+      await setMemberRole(tx, userId, role);
+      await recordAudit(tx, { actorUserId: actor.userId, action: 'update', entity: 'member', entityId: userId, before: { role: member.role }, after: { role } });
+      return { userId, role };
+    }),
+  );
+
+  r.delete(
+    '/members/:id',
+    scoped('team:manage', async ({ tx, req, actor }) => {
+      const userId = idParam(req);
+      const member = await getMember(tx, userId);
+      if (!member) throw new NotFoundError('member');
+      if (member.role === 'owner' && (await countOwners(tx)) <= 1) throw new ConflictError('A company needs at least one owner.');
+      await removeMember(tx, userId);
+      await recordAudit(tx, { actorUserId: actor.userId, action: 'remove', entity: 'member', entityId: userId, before: { role: member.role } });
+      return undefined;
+    }),
+  );
+
+  return r;
+}
+
+/** Public: what an invitation link is for, and accepting it. */
+export function invitationsRouter(db: Db): Router {
+  const r = Router();
+
+  async function lookup(token: string) {
+    const inv = await withScope(db, {}, (tx) => findInvitationByTokenHash(tx, hashToken(token)));
+    if (!inv) throw new NotFoundError('invitation');
+    if (inv.revoked_at) throw new HttpError(410, 'Invitation withdrawn', 'This invitation was withdrawn. Ask for a new one.', undefined, 'gone');
+    if (inv.accepted_at) throw new HttpError(410, 'Invitation used', 'This invitation was already accepted. Sign in instead.', undefined, 'gone');
+    if (new Date(inv.expires_at) < new Date()) throw new HttpError(410, 'Invitation expired', 'This invitation has expired. Ask for a new one.', undefined, 'gone');
+    return inv;
+  }
+
+  r.get('/:token', async (req, res) => {
+    const inv = await lookup(req.params.token);
+    const existing = await findUserByEmail(db, inv.email);
+    res.json({ companyName: inv.tenant_name, email: inv.email, role: inv.role, hasAccount: !!existing });
+  });
+
+  r.post('/:token/accept', async (req, res) => {
+    const inv = await lookup(req.params.token);
+    const input = parse(acceptInvitationInput, req.body ?? {});
+    const existing = await findUserByEmail(db, inv.email);
+    let userId: string;
+    if (existing) {
+      // Joining with an existing account needs that account signed in.
+      if (req.actor?.userId !== existing.id) {
+        throw new HttpError(409, 'Sign in first', `Sign in as ${inv.email} to accept this invitation.`, undefined, 'sign-in-required');
+      }
+      userId = existing.id;
+    } else {
+      const errors = [];
+      if (!input.name) errors.push({ field: 'name', message: 'is required' });
+      if (!input.password) errors.push({ field: 'password', message: 'is required' });
+      if (errors.length) throw new ValidationError(errors);
+      userId = '';
+    }
+    const passwordHash = input.password && !existing ? await hashPassword(input.password) : null;
+    await withScope(db, { tenantId: inv.tenant_id }, async (tx) => {
+      if (!existing) {
+        const [u] = await tx.insert(users).values({ email: inv.email, name: input.name!, passwordHash }).returning({ id: users.id });
+        userId = u!.id;
+      }
+      await addMember(tx, userId, inv.role);
+      await markInvitationAccepted(tx, inv.id);
+      await recordAudit(tx, { actorUserId: userId, action: 'join', entity: 'member', entityId: userId, after: { role: inv.role } });
+    });
+    if (req.actor) await setActiveCompany(db, req.actor.sessionId, inv.tenant_id);
+    res.status(201).json({ companyId: inv.tenant_id, role: inv.role, email: inv.email });
+  });
+
+  return r;
+}

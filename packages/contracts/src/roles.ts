@@ -1,0 +1,29 @@
+// Who may do what: the one permission table the API enforces, the web app reads to hide
+// what a role cannot do, and the tests walk through.
+export const roles = ['owner', 'dispatcher', 'technician', 'venue_contact'] as const;
+export type Role = (typeof roles)[number];
+
+export const roleLabels: Record<Role, string> = {
+  owner: 'Owner',
+  dispatcher: 'Dispatcher',
+  technician: 'Technician',
+  venue_contact: 'Venue contact',
+};
+
+export const permissions = {
+  'venues:read': ['owner', 'dispatcher', 'technician'],
+  'venues:write': ['owner', 'dispatcher'],
+  'games:read': ['owner', 'dispatcher', 'technician'],
+  'games:write': ['owner', 'dispatcher'],
+  'models:write': ['owner', 'dispatcher'],
+  'team:read': ['owner', 'dispatcher'],
+  'team:manage': ['owner'],
+  'company:manage': ['owner'],
+  'audit:read': ['owner'],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Permission = keyof typeof permissions;
+
+export function can(role: Role | null | undefined, permission: Permission): boolean {
+  return !!role && (permissions[permission] as readonly Role[]).includes(role);
+}

@@ -1,0 +1,119 @@
+// Seeds the demo scenario once: running it again finds the demo company and changes nothing.
+// Runs as the owner role (which may write for several companies).
+import { createHash } from 'node:crypto';
+import { eq } from 'drizzle-orm';
+import type { Db } from '../client.ts';
+import { gameModels, games, memberships, tenants, users, venues } from '../schema/index.ts';
+import { hashPassword } from '../passwords.ts';
+import {
+  DEMO_PASSWORD, demoCompany, demoModels, demoPeople, neighbourhoods, openingHoursFor, secondCompany,
+  secondPeople, streets, venueName,
+} from './scenario.ts';
+import { seededRandom } from './random.ts';
+
+const VENUES = 40;
+const GAMES = 150;
+
+// Tag tokens must be unguessable in real use; demo tokens are derived so the demo is reproducible.
+function demoToken(tenantId: string, i: number): string {
+  return createHash('sha256').update(`demo-tag:${tenantId}:${i}`).digest('base64url').slice(0, 24);
+}
+
+export async function seedDemo(db: Db): Promise<boolean> {
+  const [exists] = await db.select({ id: tenants.id }).from(tenants).where(eq(tenants.id, demoCompany.id));
+  if (exists) return false;
+  const passwordHash = await hashPassword(DEMO_PASSWORD);
+  await db.transaction(async (tx) => {
+    await tx.insert(tenants).values([demoCompany, secondCompany]);
+    for (const [company, people] of [
+      [demoCompany, demoPeople],
+      [secondCompany, secondPeople],
+    ] as const) {
+      for (const p of people) {
+        const [u] = await tx
+          .insert(users)
+          .values({ email: p.email, name: p.name, passwordHash })
+          .onConflictDoNothing()
+          .returning({ id: users.id });
+        const userId = u?.id ?? (await tx.select({ id: users.id }).from(users).where(eq(users.email, p.email)))[0]!.id;
+        await tx.insert(memberships).values({ tenantId: company.id, userId, role: p.role });
+      }
+    }
+    // Ilse the technician also freelances for the second company: she switches between them.
+    const [ilse] = await tx.select({ id: users.id }).from(users).where(eq(users.email, 'tech1@lakeshore.example'));
+    await tx.insert(memberships).values({ tenantId: secondCompany.id, userId: ilse!.id, role: 'technician' });
+
+    const rand = seededRandom(20261201);
+    const jitter = () => (rand() - 0.5) * 0.02;
+    const venueRows = await tx
+      .insert(venues)
+      .values(
+        Array.from({ length: VENUES }, (_, i) => {
+          const n = neighbourhoods[i % neighbourhoods.length]!;
+          return {
+            tenantId: demoCompany.id,
+            name: venueName(i),
+            addressLine: `${100 + Math.floor(rand() * 4800)} ${streets[(i * 5) % streets.length]}`,
+            city: n.city,
+            postcode: n.zip,
+            latitude: Number((n.lat + jitter()).toFixed(5)),
+            longitude: Number((n.lon + jitter()).toFixed(5)),
+            openingHours: openingHoursFor(i),
+            contactName: `Manager at ${venueName(i)}`,
+            contactPhone: `+1 312 555 01${String(i).padStart(2, '0')}`,
+            contactEmail: i === 0 ? 'venue@lakeshore.example' : '',
+            notes: i % 5 === 0 ? 'Loading dock at the back; ring the bell.' : '',
+            createdAt: new Date(Date.UTC(2019, i % 12, 1 + (i % 27))),
+          };
+        }),
+      )
+      .returning({ id: venues.id });
+    const modelRows = await tx
+      .insert(gameModels)
+      .values(demoModels.map((m) => ({ ...m, tenantId: demoCompany.id })))
+      .returning({ id: gameModels.id, kind: gameModels.kind });
+    const statuses = ['running', 'running', 'running', 'running', 'running', 'running', 'running', 'attention', 'down', 'in_shop'] as const;
+    await tx.insert(games).values(
+      Array.from({ length: GAMES }, (_, i) => {
+        const model = modelRows[Math.floor(rand() * modelRows.length)]!;
+        const installed = new Date(Date.UTC(2019 + Math.floor(rand() * 6), Math.floor(rand() * 12), 1 + Math.floor(rand() * 27)));
+        const status = statuses[Math.floor(rand() * statuses.length)]!;
+        return {
+          tenantId: demoCompany.id,
+          modelId: model.id,
+          venueId: status === 'in_shop' ? null : venueRows[i % VENUES]!.id,
+          serial: `LT-${String(10000 + i * 37).padStart(6, '0')}`,
+          status,
+          installedOn: installed.toISOString().slice(0, 10),
+          pricePerPlayCents: model.kind === 'pinball' ? (rand() < 0.5 ? 100 : 150) : model.kind === 'jukebox' ? 50 : 100,
+          tagToken: demoToken(demoCompany.id, i),
+          createdAt: installed,
+        };
+      }),
+    );
+
+    // The second company: a few venues and games of its own.
+    const [pv1, pv2, pv3] = await tx
+      .insert(venues)
+      .values([
+        { tenantId: secondCompany.id, name: 'Gravel Road Roadhouse', addressLine: '77 Quill Ct', city: 'Naperville', postcode: '60540', latitude: 41.7508, longitude: -88.1535 },
+        { tenantId: secondCompany.id, name: 'Silo Street Pins', addressLine: '412 Petrie St', city: 'Aurora', postcode: '60505', latitude: 41.7606, longitude: -88.3201 },
+        { tenantId: secondCompany.id, name: 'Cornerstone Bowl', addressLine: '9 Osgood Pl', city: 'Joliet', postcode: '60432', latitude: 41.525, longitude: -88.0817 },
+      ])
+      .returning({ id: venues.id });
+    const [pm] = await tx
+      .insert(gameModels)
+      .values({ tenantId: secondCompany.id, maker: 'Halloway Amusement', title: 'Comet Carnival', kind: 'pinball', year: 1992 })
+      .returning({ id: gameModels.id });
+    await tx.insert(games).values(
+      [pv1, pv2, pv3, pv1, pv2].map((v, i) => ({
+        tenantId: secondCompany.id,
+        modelId: pm!.id,
+        venueId: v!.id,
+        serial: `PP-${900 + i}`,
+        tagToken: demoToken(secondCompany.id, i),
+      })),
+    );
+  });
+  return true;
+}

@@ -1,0 +1,60 @@
+// Sign-in state: people, their sessions, and the companies they belong to.
+import { and, eq, isNull, sql } from 'drizzle-orm';
+import type { Db } from '../client.ts';
+import { withScope } from '../client.ts';
+import { memberships, platformAdmins, tenants, userSessions, users } from '../schema/index.ts';
+
+export async function findUserByEmail(db: Db, email: string) {
+  const [u] = await db.select().from(users).where(sql`lower(${users.email}) = lower(${email})`);
+  return u;
+}
+
+export async function createSession(db: Db, userId: string): Promise<string> {
+  const companies = await listCompaniesOf(db, userId);
+  const [s] = await db
+    .insert(userSessions)
+    .values({ userId, activeTenantId: companies[0]?.id ?? null })
+    .returning({ id: userSessions.id });
+  return s!.id;
+}
+
+export async function revokeSession(db: Db, sessionId: string): Promise<void> {
+  await db.update(userSessions).set({ revokedAt: new Date() }).where(eq(userSessions.id, sessionId));
+}
+
+export async function revokeAllSessionsOf(db: Db, userId: string): Promise<void> {
+  await db
+    .update(userSessions)
+    .set({ revokedAt: new Date() })
+    .where(and(eq(userSessions.userId, userId), isNull(userSessions.revokedAt)));
+}
+
+/** The companies a person belongs to, read under their own user scope (RLS lets them see their memberships). */
+export async function listCompaniesOf(db: Db, userId: string) {
+  return withScope(db, { userId }, (tx) =>
+    tx
+      .select({ id: tenants.id, name: tenants.name, role: memberships.role })
+      .from(memberships)
+      .innerJoin(tenants, eq(tenants.id, memberships.tenantId))
+      .where(eq(memberships.userId, userId))
+      .orderBy(tenants.name),
+  );
+}
+
+/** A live session and the person behind it, or undefined when revoked or unknown. */
+export async function loadSession(db: Db, sessionId: string) {
+  const [row] = await db
+    .select({ session: userSessions, user: users, adminActive: platformAdmins.active })
+    .from(userSessions)
+    .innerJoin(users, eq(users.id, userSessions.userId))
+    .leftJoin(platformAdmins, eq(platformAdmins.userId, users.id))
+    .where(and(eq(userSessions.id, sessionId), isNull(userSessions.revokedAt)));
+  return row;
+}
+
+export async function setActiveCompany(db: Db, sessionId: string, tenantId: string | null): Promise<void> {
+  await db
+    .update(userSessions)
+    .set({ activeTenantId: tenantId, lastSeenAt: new Date() })
+    .where(eq(userSessions.id, sessionId));
+}

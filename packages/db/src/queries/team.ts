@@ -1,0 +1,102 @@
+// Members of the current company and invitations to join it.
+import { and, eq, isNull, sql } from 'drizzle-orm';
+import type { Tx } from '../client.ts';
+import { invitations, memberships, users } from '../schema/index.ts';
+import { currentTenant } from '../schema/rls.ts';
+
+type Role = (typeof memberships.$inferSelect)['role'];
+
+export async function listMembers(tx: Tx) {
+  return tx
+    .select({ userId: users.id, name: users.name, email: users.email, role: memberships.role, since: memberships.createdAt })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(eq(memberships.tenantId, currentTenant))
+    .orderBy(users.name);
+}
+
+export async function getMember(tx: Tx, userId: string) {
+  const [m] = await tx
+    .select({ userId: memberships.userId, role: memberships.role })
+    .from(memberships)
+    .where(and(eq(memberships.tenantId, currentTenant), eq(memberships.userId, userId)));
+  return m;
+}
+
+export async function countOwners(tx: Tx): Promise<number> {
+  const [r] = await tx
+    .select({ n: sql<number>`count(*)::int` })
+    .from(memberships)
+    .where(and(eq(memberships.tenantId, currentTenant), eq(memberships.role, 'owner')));
+  return r?.n ?? 0;
+}
+
+export async function setMemberRole(tx: Tx, userId: string, role: Role) {
+  await tx
+    .update(memberships)
+    .set({ role })
+    .where(and(eq(memberships.tenantId, currentTenant), eq(memberships.userId, userId)));
+}
+
+export async function removeMember(tx: Tx, userId: string) {
+  await tx.delete(memberships).where(and(eq(memberships.tenantId, currentTenant), eq(memberships.userId, userId)));
+}
+
+export async function addMember(tx: Tx, userId: string, role: Role) {
+  await tx
+    .insert(memberships)
+    .values({ tenantId: sql`${currentTenant}`, userId, role })
+    .onConflictDoUpdate({ target: [memberships.tenantId, memberships.userId], set: { role } });
+}
+
+export async function listOpenInvitations(tx: Tx) {
+  return tx
+    .select({ id: invitations.id, email: invitations.email, role: invitations.role, expiresAt: invitations.expiresAt, createdAt: invitations.createdAt })
+    .from(invitations)
+    .where(and(eq(invitations.tenantId, currentTenant), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)))
+    .orderBy(invitations.createdAt);
+}
+
+export async function insertInvitation(
+  tx: Tx,
+  v: { email: string; role: Role; tokenHash: string; invitedBy: string; expiresAt: Date },
+) {
+  const [i] = await tx
+    .insert(invitations)
+    .values({ ...v, tenantId: sql`${currentTenant}` })
+    .returning({ id: invitations.id });
+  return i!.id;
+}
+
+export async function revokeInvitation(tx: Tx, id: string) {
+  const r = await tx
+    .update(invitations)
+    .set({ revokedAt: new Date() })
+    .where(and(eq(invitations.tenantId, currentTenant), eq(invitations.id, id), isNull(invitations.acceptedAt)))
+    .returning({ id: invitations.id });
+  return r.length > 0;
+}
+
+export async function markInvitationAccepted(tx: Tx, id: string) {
+  await tx
+    .update(invitations)
+    .set({ acceptedAt: new Date() })
+    .where(and(eq(invitations.tenantId, currentTenant), eq(invitations.id, id)));
+}
+
+export type InvitationByToken = {
+  tenant_id: string;
+  id: string;
+  email: string;
+  role: Role;
+  expires_at: Date;
+  accepted_at: Date | null;
+  revoked_at: Date | null;
+  tenant_name: string;
+};
+
+/** Finds an invitation from its link alone (no company known yet), through a narrow definer function. */
+export async function findInvitationByTokenHash(tx: Tx, tokenHash: string): Promise<InvitationByToken | undefined> {
+  const r = await tx.execute<InvitationByToken>(sql`select * from invitation_by_token_hash(${tokenHash})`);
+  return r.rows[0];
+}
