@@ -6,7 +6,10 @@
 
 /** digits × 10^exponent, as the double nearest that exact decimal value. */
 export function fromDecimal(digits: string | number, exponent: number): number {
-  return Number(`${digits}e${exponent}`);
+  // A number is taken at its shortest round-trip decimal form (4700 → "4.7e+3"), so 1e-7 scales as "1e-7", not "1e-7e9".
+  const text = typeof digits === 'number' ? digits.toExponential() : digits;
+  const [mantissa = '', ownExponent = '0'] = text.toLowerCase().split('e');
+  return Number(`${mantissa}e${Number(ownExponent) + exponent}`);
 }
 
 /** Rounds to `significant` significant figures (decimal), as the nearest double. */
