@@ -8,6 +8,8 @@ const schema = z.object({
   HOST: z.string().default('127.0.0.1'),
   /** An existing PostgreSQL server (admin URL); when unset we start a private cluster. */
   DATABASE_URL: z.string().url().optional(),
+  /** persistent: data kept per checkout between runs; ephemeral: a throwaway cluster (end-to-end tests). */
+  DB_CLUSTER: z.enum(['persistent', 'ephemeral']).default('persistent'),
   DATABASE_NAME: z.string().regex(/^[a-z_][a-z0-9_]*$/).default('bumperline'),
   /** Public origin used in e-mailed links. */
   APP_ORIGIN: z.string().url().optional(),

@@ -17,7 +17,7 @@ const logger = pino({ level: env.LOG_LEVEL, redact: ['password', '*.password'] }
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
 
 let cluster: Cluster | undefined;
-const adminUrl = env.DATABASE_URL ?? (cluster = await startCluster({ mode: 'persistent', log: (m) => logger.info(m) })).adminUrl;
+const adminUrl = env.DATABASE_URL ?? (cluster = await startCluster({ mode: env.DB_CLUSTER, log: (m) => logger.info(m) })).adminUrl;
 const urls = await provisionDatabase(adminUrl, env.DATABASE_NAME);
 logger.info(`database "${urls.database}" migrated`);
 

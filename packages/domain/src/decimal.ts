@@ -31,3 +31,8 @@ export function toSignificantDigits(value: number, significant: number): { digit
 export function nearlyEqual(a: number, b: number): boolean {
   return Math.abs(a - b) <= 1e-9 * Math.max(Math.abs(a), Math.abs(b));
 }
+
+/** The power of ten of the leading digit, read from the decimal form (Math.log10 can land a hair below an integer). */
+export function decimalExponent(value: number): number {
+  return Number(Math.abs(value).toExponential().split('e')[1]);
+}

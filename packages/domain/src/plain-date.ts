@@ -10,20 +10,29 @@ export type EpochDay = number;
 
 const MS_PER_DAY = 86_400_000;
 
+/** Days since 1970-01-01 of a proleptic Gregorian date (H. Hinnant, "chrono-compatible low-level date algorithms"). */
+function daysFromCivil(year: number, month: number, day: number): EpochDay {
+  const y = month <= 2 ? year - 1 : year;
+  const era = Math.floor(y / 400);
+  const yearOfEra = y - era * 400;
+  const dayOfYear = Math.floor((153 * (month + (month > 2 ? -3 : 9)) + 2) / 5) + day - 1;
+  const dayOfEra = yearOfEra * 365 + Math.floor(yearOfEra / 4) - Math.floor(yearOfEra / 100) + dayOfYear;
+  return era * 146_097 + dayOfEra - 719_468;
+}
+
 export function epochDayFromParts(year: number, month: number, day: number, field = 'date'): EpochDay {
-  const ms = Date.UTC(year, month - 1, day);
-  const check = new Date(ms);
   if (
-    !Number.isInteger(year) ||
+    !Number.isSafeInteger(year) ||
     !Number.isInteger(month) ||
     !Number.isInteger(day) ||
-    check.getUTCFullYear() !== year ||
-    check.getUTCMonth() !== month - 1 ||
-    check.getUTCDate() !== day
+    month < 1 ||
+    month > 12 ||
+    day < 1 ||
+    day > daysInMonth(year, month)
   ) {
     throw new DomainError('invalid-date', `${year}-${month}-${day} is not a calendar date`, field);
   }
-  return Math.round(ms / MS_PER_DAY);
+  return daysFromCivil(year, month, day);
 }
 
 export function parsePlainDate(text: string, field = 'date'): EpochDay {
@@ -37,8 +46,19 @@ export function formatPlainDate(day: EpochDay): string {
 }
 
 export function dateParts(day: EpochDay): { year: number; month: number; day: number } {
-  const d = new Date(day * MS_PER_DAY);
-  return { year: d.getUTCFullYear(), month: d.getUTCMonth() + 1, day: d.getUTCDate() };
+  // Inverse of daysFromCivil (same source); integer arithmetic, no Date objects, as schedules call it per day.
+  const z = day + 719_468;
+  const era = Math.floor(z / 146_097);
+  const dayOfEra = z - era * 146_097;
+  const yearOfEra = Math.floor((dayOfEra - Math.floor(dayOfEra / 1460) + Math.floor(dayOfEra / 36_524) - Math.floor(dayOfEra / 146_096)) / 365);
+  const dayOfYear = dayOfEra - (365 * yearOfEra + Math.floor(yearOfEra / 4) - Math.floor(yearOfEra / 100));
+  const mp = Math.floor((5 * dayOfYear + 2) / 153);
+  const month = mp < 10 ? mp + 3 : mp - 9;
+  return { year: yearOfEra + era * 400 + (month <= 2 ? 1 : 0), month, day: dayOfYear - Math.floor((153 * mp + 2) / 5) + 1 };
+}
+
+export function isLeapYear(year: number): boolean {
+  return (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
 }
 
 /** ISO 8601 weekday: Monday 1 … Sunday 7. */
@@ -62,10 +82,11 @@ export function isoWeekMonday(year: number, week: number, field = 'date'): Epoch
 /** A year has 53 ISO weeks when it starts on a Thursday, or is a leap year starting on a Wednesday. */
 function isoWeekMonday53(year: number): boolean {
   const jan1 = isoWeekday(epochDayFromParts(year, 1, 1));
-  const leap = (year % 4 === 0 && year % 100 !== 0) || year % 400 === 0;
-  return jan1 === 4 || (leap && jan1 === 3);
+  return jan1 === 4 || (isLeapYear(year) && jan1 === 3);
 }
 
+const MONTH_LENGTHS = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+
 export function daysInMonth(year: number, month: number): number {
-  return new Date(Date.UTC(year, month, 0)).getUTCDate();
+  return month === 2 && isLeapYear(year) ? 29 : (MONTH_LENGTHS[month - 1] ?? 0);
 }

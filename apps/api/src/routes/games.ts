@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { gameInput, gameListQuery, gameModelInput, gameUpdate } from '@bumperline/contracts/games';
-import { getGame, getModel, insertGame, insertModel, listGames, listModels, updateGame } from '@bumperline/db/queries/games';
+import { countGamesByStatus, getGame, getModel, insertGame, insertModel, listGames, listModels, updateGame } from '@bumperline/db/queries/games';
 import { getVenue } from '@bumperline/db/queries/venues';
 import { recordAudit } from '@bumperline/db/queries/audit';
 import type { Tx } from '@bumperline/db/client';
@@ -25,6 +25,14 @@ export function gamesRouter(scoped: ReturnType<typeof makeScoped>): Router {
   const r = Router();
 
   r.get('/', scoped('games:read', ({ tx, req }) => listGames(tx, parse(gameListQuery, req.query))));
+
+  r.get(
+    '/summary',
+    scoped('games:read', async ({ tx }) => {
+      const byStatus = await countGamesByStatus(tx);
+      return { byStatus, total: Object.values(byStatus).reduce((a, b) => a + (b ?? 0), 0) };
+    }),
+  );
 
   r.get(
     '/:id',

@@ -53,6 +53,13 @@ const venueWords1 = ['Copper', 'Lantern', 'Velvet', 'Rusty', 'Blue Heron', 'Thir
 const venueWords2 = ['Tap', 'Tavern', 'Lanes', 'Social Club', 'Alehouse', 'Arcade Bar', 'Lounge', 'Pub', 'Bowl', 'Diner', 'Saloon', 'Taproom'];
 export const streets = ['Larkspur Ave', 'Tamarack St', 'Cinder Row', 'Brackett Blvd', 'Wexley Ave', 'Osgood Pl', 'Fennimore St', 'Halvard Ave', 'Quill Ct', 'Rendell St', 'Marlowe Ave', 'Ashgrove Rd', 'Petrie St', 'Loomis Row'];
 
+const contactFirst = ['Rosalind', 'Tobias', 'Marisol', 'Desmond', 'Ingrid', 'Lamar', 'Yusuf', 'Greta', 'Colm', 'Anika', 'Bartholomew', 'Soledad', 'Emeka', 'Wren'];
+const contactLast = ['Halvorsen', 'Okonkwo', 'Prendergast', 'Zielinski', 'Abernathy', 'Villanueva', 'Thistlewood', 'Mbeki', 'Castellano', 'Fairbairn', 'Novak', 'Quintero'];
+
+export function contactName(i: number): string {
+  return `${contactFirst[(i * 3) % contactFirst.length]} ${contactLast[(i * 5 + 1) % contactLast.length]}`;
+}
+
 export function venueName(i: number): string {
   return `${venueWords1[i % venueWords1.length]} ${venueWords2[(i * 7 + 3) % venueWords2.length]}`;
 }

@@ -7,7 +7,7 @@ import { gameModels, games, memberships, tenants, users, venues } from '../schem
 import { hashPassword } from '../passwords.ts';
 import {
   DEMO_PASSWORD, demoCompany, demoModels, demoPeople, neighbourhoods, openingHoursFor, secondCompany,
-  secondPeople, streets, venueName,
+  secondPeople, streets, venueName, contactName,
 } from './scenario.ts';
 import { seededRandom } from './random.ts';
 
@@ -59,7 +59,7 @@ export async function seedDemo(db: Db): Promise<boolean> {
             latitude: Number((n.lat + jitter()).toFixed(5)),
             longitude: Number((n.lon + jitter()).toFixed(5)),
             openingHours: openingHoursFor(i),
-            contactName: `Manager at ${venueName(i)}`,
+            contactName: i === 0 ? 'Hollis Varga' : contactName(i),
             contactPhone: `+1 312 555 01${String(i).padStart(2, '0')}`,
             contactEmail: i === 0 ? 'venue@lakeshore.example' : '',
             notes: i % 5 === 0 ? 'Loading dock at the back; ring the bell.' : '',

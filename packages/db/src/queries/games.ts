@@ -131,3 +131,13 @@ export async function insertModel(tx: Tx, values: Omit<typeof gameModels.$inferI
     .returning({ id: gameModels.id });
   return m?.id;
 }
+
+/** How many active games are in each status right now. */
+export async function countGamesByStatus(tx: Tx) {
+  const rows = await tx
+    .select({ status: games.status, n: sql<number>`count(*)::int` })
+    .from(games)
+    .where(and(eq(games.tenantId, currentTenant), isNull(games.retiredAt)))
+    .groupBy(games.status);
+  return Object.fromEntries(rows.map((r) => [r.status, r.n])) as Partial<Record<(typeof games.$inferSelect)['status'], number>>;
+}

@@ -12,7 +12,8 @@ const sortKeys: Record<'name' | 'city' | 'createdAt', SortKey> = {
   createdAt: { expr: sql`${venues.createdAt}`, type: 'timestamptz' },
 };
 
-const gameCount = sql<number>`(select count(*)::int from ${games} g where g.tenant_id = ${venues.tenantId} and g.venue_id = ${venues.id} and g.retired_at is null)`;
+// Qualified by hand: inside a subquery drizzle would print bare column names that bind to the inner table.
+const gameCount = sql<number>`(select count(*)::int from ${games} g where g.tenant_id = "venues"."tenant_id" and g.venue_id = "venues"."id" and g.retired_at is null)`;
 
 export interface VenueListParams {
   q?: string;

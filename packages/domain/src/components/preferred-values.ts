@@ -1,5 +1,5 @@
 import { DomainError } from '../errors';
-import { fromDecimal } from '../decimal';
+import { decimalExponent, fromDecimal } from '../decimal';
 import { describe, requirePositive } from '../input-checks';
 
 /**
@@ -57,7 +57,7 @@ export function nearestPreferredValue(value: number, series: ESeries, rounding: 
   if (!['nearest', 'up', 'down'].includes(rounding)) {
     throw new DomainError('unknown-code', `rounding must be nearest, up or down (got ${describe(rounding)})`, 'rounding');
   }
-  const exponent = Math.floor(Math.log10(target));
+  const exponent = decimalExponent(target);
   // Candidates from the decade below to the decade above cover values that sit at a decade's edge after rounding.
   const candidates: number[] = [];
   for (const e of [exponent - 1, exponent, exponent + 1]) {

@@ -1,5 +1,5 @@
 import { DomainError } from '../errors';
-import { fromDecimal, roundToSignificant } from '../decimal';
+import { decimalExponent, fromDecimal, roundToSignificant } from '../decimal';
 import { describe, requireFinite, requireInRange } from '../input-checks';
 
 /**
@@ -192,17 +192,11 @@ const FORMAT_PREFIXES: ReadonlyArray<[number, string]> = [
   [12, 'T'],
 ];
 
-/** Picks the engineering prefix that puts the mantissa in [1, 1000) after rounding. */
+/** Rounds first, then picks the engineering prefix that puts the mantissa in [1, 1000): 999.7 → 1.00 k. */
 function engineering(value: number, significantDigits: number): { mantissa: number; exponent: number } {
-  const magnitude = Math.abs(value);
-  let exponent = Math.floor(Math.log10(magnitude) / 3) * 3;
-  exponent = Math.max(-12, Math.min(12, exponent));
-  let mantissa = roundToSignificant(fromDecimal(magnitude, -exponent), significantDigits);
-  if (mantissa >= 1000 && exponent < 12) {
-    exponent += 3;
-    mantissa = roundToSignificant(fromDecimal(magnitude, -exponent), significantDigits);
-  }
-  return { mantissa: Math.sign(value) * mantissa, exponent };
+  const rounded = roundToSignificant(value, significantDigits);
+  const exponent = Math.max(-12, Math.min(12, Math.floor(decimalExponent(rounded) / 3) * 3));
+  return { mantissa: fromDecimal(rounded, -exponent), exponent };
 }
 
 /** "4.7 kΩ", "100 nF", "250 mA": SI style, a space before the unit (SI Brochure §5.4.3). */
@@ -233,12 +227,9 @@ export function formatRkm(value: number, unit: 'Ω' | 'F', options: { significan
   if (magnitude === 0) return unit === 'Ω' ? '0R' : '0F';
   const lowest = exponents[0] ?? 0;
   const highest = exponents[exponents.length - 1] ?? 0;
-  let exponent = Math.max(lowest, Math.min(highest, Math.floor(Math.log10(magnitude) / 3) * 3));
-  let mantissa = roundToSignificant(fromDecimal(magnitude, -exponent), significant);
-  if (mantissa >= 1000 && exponent < highest) {
-    exponent += 3;
-    mantissa = roundToSignificant(fromDecimal(magnitude, -exponent), significant);
-  }
+  const rounded = roundToSignificant(magnitude, significant);
+  const exponent = Math.max(lowest, Math.min(highest, Math.floor(decimalExponent(rounded) / 3) * 3));
+  const mantissa = fromDecimal(rounded, -exponent);
   if (mantissa >= 1000 || mantissa < 0.001) {
     throw new DomainError('not-representable', `${value} ${unit} is outside the range an RKM code can show`, 'value');
   }

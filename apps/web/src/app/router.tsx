@@ -1,0 +1,61 @@
+import { createBrowserRouter, Navigate } from 'react-router-dom';
+import { paths } from './paths.ts';
+import { AppShell } from './app-shell.tsx';
+import { RequirePermission, RequireSignedIn } from './guards.tsx';
+import { useMe } from '../api/me.ts';
+import { Loading } from '../components/states.tsx';
+import { SignInPage } from '../features/auth/sign-in-page.tsx';
+import { SignUpPage } from '../features/auth/sign-up-page.tsx';
+import { RequestLinkPage, ResetPasswordPage } from '../features/auth/password-pages.tsx';
+import { LinkSignInPage } from '../features/auth/link-sign-in-page.tsx';
+import { InvitationPage } from '../features/auth/invitation-page.tsx';
+import { HomePage } from '../features/home/home-page.tsx';
+import { LandingPage } from '../features/home/landing-page.tsx';
+import { VenuesPage } from '../features/venues/venues-page.tsx';
+import { VenuePage } from '../features/venues/venue-page.tsx';
+import { EditVenuePage, NewVenuePage } from '../features/venues/venue-form-page.tsx';
+import { GamesPage } from '../features/games/games-page.tsx';
+import { GamePage } from '../features/games/game-page.tsx';
+import { EditGamePage, NewGamePage } from '../features/games/game-form-page.tsx';
+import { TeamPage } from '../features/team/team-page.tsx';
+import { ActivityPage } from '../features/team/activity-page.tsx';
+import { NotFoundPage } from './not-found-page.tsx';
+
+/** "/" is the landing page for visitors and the Today screen once signed in. */
+function Root() {
+  const me = useMe();
+  if (me.isLoading) return <Loading />;
+  return me.data ? <Navigate to={paths.today} replace /> : <LandingPage />;
+}
+
+export const router = createBrowserRouter([
+  { path: paths.home, element: <Root /> },
+  { path: paths.signIn, element: <SignInPage /> },
+  { path: paths.signUp, element: <SignUpPage /> },
+  { path: paths.signInLink, element: <RequestLinkPage kind="sign-in-link" /> },
+  { path: paths.signInLinkOpen, element: <LinkSignInPage /> },
+  { path: paths.forgotPassword, element: <RequestLinkPage kind="password-reset" /> },
+  { path: paths.resetPassword, element: <ResetPasswordPage /> },
+  { path: paths.invitation, element: <InvitationPage /> },
+  {
+    element: (
+      <RequireSignedIn>
+        <AppShell />
+      </RequireSignedIn>
+    ),
+    children: [
+      { path: paths.today, element: <HomePage /> },
+      { path: paths.venues, element: <RequirePermission permission="venues:read"><VenuesPage /></RequirePermission> },
+      { path: paths.newVenue, element: <RequirePermission permission="venues:write"><NewVenuePage /></RequirePermission> },
+      { path: '/venues/:id', element: <RequirePermission permission="venues:read"><VenuePage /></RequirePermission> },
+      { path: '/venues/:id/edit', element: <RequirePermission permission="venues:write"><EditVenuePage /></RequirePermission> },
+      { path: paths.games, element: <RequirePermission permission="games:read"><GamesPage /></RequirePermission> },
+      { path: paths.newGame, element: <RequirePermission permission="games:write"><NewGamePage /></RequirePermission> },
+      { path: '/games/:id', element: <RequirePermission permission="games:read"><GamePage /></RequirePermission> },
+      { path: '/games/:id/edit', element: <RequirePermission permission="games:write"><EditGamePage /></RequirePermission> },
+      { path: paths.team, element: <RequirePermission permission="team:read"><TeamPage /></RequirePermission> },
+      { path: paths.activity, element: <RequirePermission permission="audit:read"><ActivityPage /></RequirePermission> },
+      { path: '*', element: <NotFoundPage /> },
+    ],
+  },
+]);

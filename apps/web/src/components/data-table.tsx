@@ -1,0 +1,152 @@
+// The one table: search, sortable headers, keyset paging and CSV export, with loading/empty/error states.
+import { ArrowDown, ArrowUp, ArrowUpDown, ChevronLeft, ChevronRight, Download, Search } from 'lucide-react';
+import { useEffect, useState, type ReactNode } from 'react';
+import Papa from 'papaparse';
+import { Empty, ErrorState, Loading } from './states.tsx';
+import { inputClass } from './field.tsx';
+
+export interface Column<T, S extends string> {
+  header: string;
+  cell: (row: T) => ReactNode;
+  /** The API sort key, when this column can be sorted. */
+  sort?: S;
+  /** The value written to the CSV export. */
+  csv: (row: T) => string | number | null;
+  className?: string;
+}
+
+export interface DataTableProps<T, S extends string> {
+  caption: string;
+  columns: Column<T, S>[];
+  rows: T[] | undefined;
+  rowKey: (row: T) => string;
+  isLoading: boolean;
+  error: unknown;
+  onRetry: () => void;
+  search: string;
+  onSearch: (q: string) => void;
+  searchLabel: string;
+  sort: S;
+  order: 'asc' | 'desc';
+  onSort: (s: S) => void;
+  hasPrev: boolean;
+  hasNext: boolean;
+  onPrev: () => void;
+  onNext: () => void;
+  /** Fetches every row matching the current search and filters, for export. */
+  exportAll: () => Promise<T[]>;
+  exportName: string;
+  emptyTitle: string;
+  emptyHint?: ReactNode;
+  filters?: ReactNode;
+}
+
+export function DataTable<T, S extends string>(p: DataTableProps<T, S>) {
+  const [draft, setDraft] = useState(p.search);
+  const [exporting, setExporting] = useState(false);
+  useEffect(() => setDraft(p.search), [p.search]);
+  // Search as the person types, without a request per keystroke.
+  useEffect(() => {
+    if (draft === p.search) return;
+    const t = setTimeout(() => p.onSearch(draft), 300);
+    return () => clearTimeout(t);
+  }, [draft, p]);
+
+  async function exportCsv() {
+    setExporting(true);
+    try {
+      const all = await p.exportAll();
+      const csv = Papa.unparse({
+        fields: p.columns.map((c) => c.header),
+        data: all.map((row) => p.columns.map((c) => c.csv(row) ?? '')),
+      });
+      const url = URL.createObjectURL(new Blob([csv], { type: 'text/csv;charset=utf-8' }));
+      const a = document.createElement('a');
+      a.href = url;
+      a.download = `${p.exportName}-${new Date().toISOString().slice(0, 10)}.csv`;
+      a.click();
+      URL.revokeObjectURL(url);
+    } finally {
+      setExporting(false);
+    }
+  }
+
+  return (
+    <section className="card p-0" aria-label={p.caption}>
+      <div className="flex flex-wrap items-center gap-3 border-b border-paper-line p-3">
+        <label className="relative min-w-56 flex-1">
+          <span className="sr-only">{p.searchLabel}</span>
+          <Search aria-hidden className="pointer-events-none absolute top-3 left-3 size-5 text-ink-muted" />
+          <input
+            type="search"
+            className={`${inputClass} pl-10`}
+            placeholder={p.searchLabel}
+            value={draft}
+            onChange={(e) => setDraft(e.target.value)}
+          />
+        </label>
+        {p.filters}
+        <button type="button" className="btn-secondary" onClick={exportCsv} disabled={exporting}>
+          <Download aria-hidden className="size-4" /> {exporting ? 'Exporting…' : 'Export CSV'}
+        </button>
+      </div>
+      {p.isLoading ? (
+        <Loading />
+      ) : p.error ? (
+        <ErrorState error={p.error} onRetry={p.onRetry} />
+      ) : !p.rows?.length ? (
+        <Empty title={p.emptyTitle}>{p.emptyHint}</Empty>
+      ) : (
+        <div className="overflow-x-auto">
+          <table className="w-full text-left">
+            <caption className="sr-only">{p.caption}</caption>
+            <thead className="bg-paper-dim text-sm text-ink-soft">
+              <tr>
+                {p.columns.map((c) => (
+                  <th
+                    key={c.header}
+                    scope="col"
+                    className={`px-3 py-2 font-bold ${c.className ?? ''}`}
+                    aria-sort={c.sort && c.sort === p.sort ? (p.order === 'asc' ? 'ascending' : 'descending') : undefined}
+                  >
+                    {c.sort ? (
+                      <button type="button" className="inline-flex items-center gap-1 font-bold hover:text-ink" onClick={() => p.onSort(c.sort!)}>
+                        {c.header}
+                        {c.sort === p.sort ? (
+                          p.order === 'asc' ? <ArrowUp aria-hidden className="size-4" /> : <ArrowDown aria-hidden className="size-4" />
+                        ) : (
+                          <ArrowUpDown aria-hidden className="size-4 opacity-50" />
+                        )}
+                      </button>
+                    ) : (
+                      c.header
+                    )}
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {p.rows.map((row) => (
+                <tr key={p.rowKey(row)} className="border-t border-paper-line hover:bg-paper-dim/60">
+                  {p.columns.map((c) => (
+                    <td key={c.header} className={`px-3 py-2.5 align-middle ${c.className ?? ''}`}>
+                      {c.cell(row)}
+                    </td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      )}
+      <nav aria-label="Pages" className="flex items-center justify-end gap-2 border-t border-paper-line p-3">
+        <button type="button" className="btn-secondary" onClick={p.onPrev} disabled={!p.hasPrev}>
+          <ChevronLeft aria-hidden className="size-4" /> Previous
+        </button>
+        <button type="button" className="btn-secondary" onClick={p.onNext} disabled={!p.hasNext}>
+          Next <ChevronRight aria-hidden className="size-4" />
+        </button>
+      </nav>
+    </section>
+  );
+}

@@ -1,0 +1,64 @@
+// A table's search, sort and page kept in the address bar, so reload and back keep the view.
+import { useCallback, useMemo } from 'react';
+import { useSearchParams } from 'react-router-dom';
+
+export interface ListParams<S extends string> {
+  q: string;
+  sort: S;
+  order: 'asc' | 'desc';
+  cursor: string | undefined;
+  /** Cursors of the pages before this one, for "Previous". */
+  trail: string[];
+}
+
+export function useListParams<S extends string>(defaultSort: S, extraKeys: string[] = []) {
+  const [sp, setSp] = useSearchParams();
+  const params: ListParams<S> = useMemo(
+    () => ({
+      q: sp.get('q') ?? '',
+      sort: (sp.get('sort') as S | null) ?? defaultSort,
+      order: sp.get('order') === 'desc' ? 'desc' : 'asc',
+      cursor: sp.get('cursor') ?? undefined,
+      trail: sp.get('trail') ? sp.get('trail')!.split(',') : [],
+    }),
+    [sp, defaultSort],
+  );
+  const extras = useMemo(() => Object.fromEntries(extraKeys.map((k) => [k, sp.get(k) ?? ''])), [sp, extraKeys]);
+
+  const update = useCallback(
+    (changes: Record<string, string | undefined>, resetPage = true) => {
+      setSp(
+        (prev) => {
+          const next = new URLSearchParams(prev);
+          for (const [k, v] of Object.entries(changes)) {
+            if (v === undefined || v === '') next.delete(k);
+            else next.set(k, v);
+          }
+          if (resetPage) {
+            next.delete('cursor');
+            next.delete('trail');
+          }
+          return next;
+        },
+        { replace: true },
+      );
+    },
+    [setSp],
+  );
+
+  return {
+    params,
+    extras,
+    setSearch: (q: string) => update({ q }),
+    setFilter: (key: string, value: string) => update({ [key]: value }),
+    toggleSort: (sort: S) =>
+      update({ sort, order: params.sort === sort && params.order === 'asc' ? 'desc' : 'asc' }),
+    nextPage: (cursor: string) =>
+      update({ cursor, trail: [...params.trail, params.cursor ?? ''].join(',') }, false),
+    prevPage: () => {
+      const trail = [...params.trail];
+      const prev = trail.pop();
+      update({ cursor: prev || undefined, trail: trail.length ? trail.join(',') : undefined }, false);
+    },
+  };
+}

@@ -1,0 +1,111 @@
+import { Link } from 'react-router-dom';
+import { Plus } from 'lucide-react';
+import { gameKindLabels, gameKinds, gameStatusLabels, gameStatuses, type Game } from '@bumperline/contracts/games';
+import { DataTable, type Column } from '../../components/data-table.tsx';
+import { PageHeader } from '../../components/page-header.tsx';
+import { StatusBadge } from '../../components/status-badge.tsx';
+import { useListParams } from '../../components/use-list-params.ts';
+import { inputClass } from '../../components/field.tsx';
+import { paths } from '../../app/paths.ts';
+import { useCan } from '../../api/use-can.ts';
+import { allGames, useGames } from '../../api/games.ts';
+
+type Sort = 'title' | 'serial' | 'status' | 'venue' | 'createdAt';
+
+const columns: Column<Game, Sort>[] = [
+  {
+    header: 'Game',
+    sort: 'title',
+    cell: (g) => (
+      <Link className="link" to={paths.game(g.id)}>
+        {g.model.title}
+      </Link>
+    ),
+    csv: (g) => g.model.title,
+  },
+  { header: 'Maker', cell: (g) => g.model.maker, csv: (g) => g.model.maker, className: 'hidden lg:table-cell' },
+  { header: 'Kind', cell: (g) => gameKindLabels[g.model.kind], csv: (g) => g.model.kind, className: 'hidden md:table-cell' },
+  { header: 'Serial', sort: 'serial', cell: (g) => <span className="tabular">{g.serial}</span>, csv: (g) => g.serial },
+  { header: 'Venue', sort: 'venue', cell: (g) => g.venueName ?? <span className="text-ink-muted">Not placed</span>, csv: (g) => g.venueName },
+  { header: 'Status', sort: 'status', cell: (g) => <StatusBadge status={g.status} />, csv: (g) => gameStatusLabels[g.status] },
+];
+
+export function GamesPage() {
+  const list = useListParams<Sort>('title', ['status', 'kind']);
+  const { params, extras } = list;
+  const query = {
+    q: params.q || undefined,
+    sort: params.sort,
+    order: params.order,
+    cursor: params.cursor,
+    limit: 25,
+    status: (extras.status || undefined) as Game['status'] | undefined,
+    kind: (extras.kind || undefined) as Game['model']['kind'] | undefined,
+  };
+  const games = useGames(query);
+  const canWrite = useCan('games:write');
+
+  return (
+    <>
+      <PageHeader
+        title="Games"
+        subtitle="Every cabinet on location or at the shop."
+        actions={
+          canWrite && (
+            <Link to={paths.newGame} className="btn-primary">
+              <Plus aria-hidden className="size-4" /> Add game
+            </Link>
+          )
+        }
+      />
+      <DataTable
+        caption="Games"
+        columns={columns}
+        rows={games.data?.items}
+        rowKey={(g) => g.id}
+        isLoading={games.isLoading}
+        error={games.error}
+        onRetry={() => games.refetch()}
+        search={params.q}
+        onSearch={list.setSearch}
+        searchLabel="Search by title, maker, serial or venue"
+        sort={params.sort}
+        order={params.order}
+        onSort={list.toggleSort}
+        hasPrev={!!params.cursor}
+        hasNext={!!games.data?.nextCursor}
+        onPrev={list.prevPage}
+        onNext={() => games.data?.nextCursor && list.nextPage(games.data.nextCursor)}
+        exportAll={() => allGames({ q: query.q, sort: query.sort, order: query.order, status: query.status, kind: query.kind })}
+        exportName="games"
+        emptyTitle={params.q || extras.status || extras.kind ? 'No game matches these filters.' : 'No games yet.'}
+        filters={
+          <>
+            <label className="flex items-center gap-2">
+              <span className="font-semibold">Status</span>
+              <select className={`${inputClass} w-auto`} value={extras.status} onChange={(e) => list.setFilter('status', e.target.value)}>
+                <option value="">Any</option>
+                {gameStatuses.map((s) => (
+                  <option key={s} value={s}>
+                    {gameStatusLabels[s]}
+                  </option>
+                ))}
+              </select>
+            </label>
+            <label className="flex items-center gap-2">
+              <span className="font-semibold">Kind</span>
+              <select className={`${inputClass} w-auto`} value={extras.kind} onChange={(e) => list.setFilter('kind', e.target.value)}>
+                <option value="">Any</option>
+                {gameKinds.map((k) => (
+                  <option key={k} value={k}>
+                    {gameKindLabels[k]}
+                  </option>
+                ))}
+              </select>
+            </label>
+          </>
+        }
+      />
+    </>
+  );
+}

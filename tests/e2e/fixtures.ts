@@ -1,0 +1,40 @@
+// Shared steps for the browser tests: sign in as a demo person, scan a screen with axe, keep a screenshot.
+import { expect, type Page } from '@playwright/test';
+import AxeBuilder from '@axe-core/playwright';
+
+export const DEMO_PASSWORD = 'bumperline-demo';
+export const demo = {
+  owner: 'owner@lakeshore.example',
+  dispatcher: 'dispatch@lakeshore.example',
+  technician: 'tech1@lakeshore.example',
+  venueContact: 'venue@lakeshore.example',
+  secondOwner: 'owner@prairie.example',
+};
+
+export async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page.getByRole('heading', { level: 1 })).not.toHaveText('Sign in');
+}
+
+/** Fails on any serious or critical accessibility violation (axe-core, WCAG 2.x A/AA rules). */
+export async function scan(page: Page, name: string) {
+  await page.waitForLoadState('networkidle');
+  const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa', 'wcag22aa']).analyze();
+  const bad = results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
+  await page.screenshot({ path: `e2e/screenshots/${name}.png`, fullPage: true });
+  expect(bad.map((v) => `${v.id}: ${v.help} (${v.nodes.map((n) => n.target.join(' ')).slice(0, 3).join(', ')})`), `axe on ${name}`).toEqual([]);
+}
+
+/** Any console error in the page fails the test. */
+export function failOnConsoleErrors(page: Page) {
+  const errors: string[] = [];
+  page.on('console', (m) => {
+    // A 401 from /api/account/me is how a signed-out page learns it is signed out.
+    if (m.type() === 'error' && !/401 \(Unauthorized\)/.test(m.text())) errors.push(m.text());
+  });
+  page.on('pageerror', (e) => errors.push(e.message));
+  return () => expect(errors).toEqual([]);
+}
