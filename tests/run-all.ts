@@ -25,7 +25,7 @@ function ensureChromium(): void {
     console.error('Chromium is not installed. Install the Debian package: sudo apt-get install chromium');
     process.exit(1);
   }
-  console.log('Installing Debian\'s chromium with apt-get (about a minute)…');
+  console.log("Installing Debian's chromium with apt-get (about a minute)…");
   const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
   execFileSync('apt-get', ['update', '-qq'], { stdio: 'inherit', env });
   execFileSync('apt-get', ['install', '-y', '-qq', 'chromium', 'fonts-liberation'], { stdio: 'inherit', env });
@@ -36,6 +36,11 @@ if (!only || only === 'vitest') run('Unit and API integration tests (Vitest)', b
 if (!only || only === 'e2e') {
   ensureChromium();
   run('Build the web app', bin('vite'), ['build', '--logLevel', 'warn']);
-  run('End-to-end tests (Playwright + Chromium)', bin('playwright'), ['test', '--config', 'e2e/playwright.config.ts'], path.join(root, 'tests'));
+  run(
+    'End-to-end tests (Playwright + Chromium)',
+    bin('playwright'),
+    ['test', '--config', 'e2e/playwright.config.ts'],
+    path.join(root, 'tests'),
+  );
 }
 console.log('\nAll test suites passed.');

@@ -72,9 +72,17 @@ describe('roles', () => {
         a.post('/api/venues').set(JSON_HEADERS).send({ name: 'Probe', addressLine: '1 Probe St', city: 'X', latitude: 1, longitude: 1 }),
       'games:read': (a) => a.get('/api/games'),
       'games:write': (a) => a.post(`/api/games/${company.gameIds[0]}/retire`).set(JSON_HEADERS),
-      'models:write': (a) => a.post('/api/models').set(JSON_HEADERS).send({ maker: 'Probe', title: `P${Math.random()}`, kind: 'darts' }),
+      'models:write': (a) =>
+        a
+          .post('/api/models')
+          .set(JSON_HEADERS)
+          .send({ maker: 'Probe', title: `P${Math.random()}`, kind: 'darts' }),
       'team:read': (a) => a.get('/api/team'),
-      'team:manage': (a) => a.post('/api/team/invitations').set(JSON_HEADERS).send({ email: `inv${Math.random()}@x.test`, role: 'technician' }),
+      'team:manage': (a) =>
+        a
+          .post('/api/team/invitations')
+          .set(JSON_HEADERS)
+          .send({ email: `inv${Math.random()}@x.test`, role: 'technician' }),
       'company:manage': (a) => a.patch('/api/company').set(JSON_HEADERS).send({ locale: 'en-US' }),
       'audit:read': (a) => a.get('/api/activity'),
     };
@@ -165,7 +173,11 @@ describe('invitations', () => {
     const token = /token=([\w-]+)/.exec(t.mail.lastTo('newtech@gamma.test')?.text ?? '')?.[1];
     const info = await request(t.app).get(`/api/invitations/${token}`).expect(200);
     expect(info.body).toEqual({ companyName: 'Gamma Coin', email: 'newtech@gamma.test', role: 'technician', hasAccount: false });
-    await request(t.app).post(`/api/invitations/${token}/accept`).set(JSON_HEADERS).send({ name: 'New Tech', password: 'new tech passphrase' }).expect(201);
+    await request(t.app)
+      .post(`/api/invitations/${token}/accept`)
+      .set(JSON_HEADERS)
+      .send({ name: 'New Tech', password: 'new tech passphrase' })
+      .expect(201);
     const agent = await signedInAgent(t, 'newtech@gamma.test', 'new tech passphrase');
     const me = await agent.get('/api/account/me').expect(200);
     expect(me.body).toMatchObject({ role: 'technician', company: { name: 'Gamma Coin' } });

@@ -39,7 +39,9 @@ describe('GET /api/health', () => {
     await admin.connect();
     try {
       await admin.query(`alter database ${db.database} allow_connections false`);
-      await admin.query(`select pg_terminate_backend(pid) from pg_stat_activity where datname = $1 and usename = 'bumperline_app'`, [db.database]);
+      await admin.query(`select pg_terminate_backend(pid) from pg_stat_activity where datname = $1 and usename = 'bumperline_app'`, [
+        db.database,
+      ]);
       const down = await request(app).get('/api/health').expect(503);
       expect(down.headers['content-type']).toMatch(/problem\+json/);
       expect(down.body).toMatchObject({ status: 503, db: 'down' });

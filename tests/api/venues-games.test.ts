@@ -37,7 +37,11 @@ describe('venues', () => {
     const id = created.body.id;
     expect(created.body).toMatchObject({ name: 'Juniper Lanes', version: 1, gameCount: 0, retiredAt: null });
     await owner.get(`/api/venues/${id}`).expect(200);
-    const updated = await owner.patch(`/api/venues/${id}`).set(JSON_HEADERS).send({ version: 1, name: 'Juniper Lanes & Grill' }).expect(200);
+    const updated = await owner
+      .patch(`/api/venues/${id}`)
+      .set(JSON_HEADERS)
+      .send({ version: 1, name: 'Juniper Lanes & Grill' })
+      .expect(200);
     expect(updated.body).toMatchObject({ name: 'Juniper Lanes & Grill', version: 2 });
     const retired = await owner.post(`/api/venues/${id}/retire`).set(JSON_HEADERS).expect(200);
     expect(retired.body.retiredAt).not.toBeNull();
@@ -52,7 +56,11 @@ describe('venues', () => {
   });
 
   it('two people editing at once: the second is told and shown the current values (no lost update)', async () => {
-    const { body: v } = await owner.post('/api/venues').set(JSON_HEADERS).send(venueBody({ name: 'Race Tavern' })).expect(201);
+    const { body: v } = await owner
+      .post('/api/venues')
+      .set(JSON_HEADERS)
+      .send(venueBody({ name: 'Race Tavern' }))
+      .expect(201);
     await owner.patch(`/api/venues/${v.id}`).set(JSON_HEADERS).send({ version: 1, notes: 'first' }).expect(200);
     const late = await owner.patch(`/api/venues/${v.id}`).set(JSON_HEADERS).send({ version: 1, notes: 'second' }).expect(409);
     expect(late.headers['content-type']).toMatch(/application\/problem\+json/);
@@ -61,7 +69,11 @@ describe('venues', () => {
 
   it('searches, sorts both ways and pages with a cursor without gaps or repeats', async () => {
     for (let i = 0; i < 7; i++) {
-      await owner.post('/api/venues').set(JSON_HEADERS).send(venueBody({ name: `Paging Pub ${String.fromCharCode(71 - i)}`, city: 'Pagetown' })).expect(201);
+      await owner
+        .post('/api/venues')
+        .set(JSON_HEADERS)
+        .send(venueBody({ name: `Paging Pub ${String.fromCharCode(71 - i)}`, city: 'Pagetown' }))
+        .expect(201);
     }
     const seen: string[] = [];
     let cursor: string | null = null;
@@ -78,7 +90,7 @@ describe('venues', () => {
     expect(byCity.body.items).toHaveLength(7);
   });
 
-  it("an id from another company is 404 and never its data", async () => {
+  it('an id from another company is 404 and never its data', async () => {
     const res = await owner.get(`/api/venues/${b.venueIds[0]}`).expect(404);
     expect(JSON.stringify(res.body)).not.toContain('Beta');
     await owner.patch(`/api/venues/${b.venueIds[0]}`).set(JSON_HEADERS).send({ version: 1, name: 'Hijack' }).expect(404);
@@ -128,13 +140,30 @@ describe('bad input', () => {
 
   it('malformed JSON, wrong types, unknown fields and over-long strings are 400 naming the field, and nothing is written', async () => {
     const before = await t.db.owner.execute(sql`select count(*)::int as n from venues`);
-    const malformed = await owner.post('/api/venues').set(JSON_HEADERS).set('Content-Type', 'application/json').send('{"name": ').expect(400);
+    const malformed = await owner
+      .post('/api/venues')
+      .set(JSON_HEADERS)
+      .set('Content-Type', 'application/json')
+      .send('{"name": ')
+      .expect(400);
     expect(malformed.body.errors[0].field).toBe('(body)');
-    const wrongType = await owner.post('/api/venues').set(JSON_HEADERS).send(venueBody({ latitude: 'north' })).expect(400);
+    const wrongType = await owner
+      .post('/api/venues')
+      .set(JSON_HEADERS)
+      .send(venueBody({ latitude: 'north' }))
+      .expect(400);
     expect(wrongType.body.errors.map((e: { field: string }) => e.field)).toEqual(['latitude']);
-    const unknown = await owner.post('/api/venues').set(JSON_HEADERS).send(venueBody({ owner: 'me' })).expect(400);
+    const unknown = await owner
+      .post('/api/venues')
+      .set(JSON_HEADERS)
+      .send(venueBody({ owner: 'me' }))
+      .expect(400);
     expect(unknown.body.errors).toEqual([{ field: 'owner', message: 'is not a known field' }]);
-    const long = await owner.post('/api/venues').set(JSON_HEADERS).send(venueBody({ name: 'x'.repeat(500) })).expect(400);
+    const long = await owner
+      .post('/api/venues')
+      .set(JSON_HEADERS)
+      .send(venueBody({ name: 'x'.repeat(500) }))
+      .expect(400);
     expect(long.body.errors[0]).toMatchObject({ field: 'name', message: expect.stringMatching(/at most 120/) });
     const badQuery = await owner.get('/api/venues').query({ limit: 'lots', cursor: 'garbage' }).expect(400);
     expect(badQuery.body.errors.map((e: { field: string }) => e.field)).toContain('limit');
@@ -146,7 +175,11 @@ describe('bad input', () => {
 
   it('state-changing requests without our header or from another origin are refused', async () => {
     await owner.post('/api/venues').send(venueBody()).expect(403);
-    await owner.post('/api/venues').set({ ...JSON_HEADERS, Origin: 'https://evil.example' }).send(venueBody()).expect(403);
+    await owner
+      .post('/api/venues')
+      .set({ ...JSON_HEADERS, Origin: 'https://evil.example' })
+      .send(venueBody())
+      .expect(403);
   });
 
   it('unsigned requests are 401', async () => {

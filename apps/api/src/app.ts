@@ -109,7 +109,8 @@ export function createApp(deps: AppDeps): Express {
 
   app.use(notFoundHandler);
   app.use(((err, req, res, next) => {
-    if (err instanceof InvalidCursorError) return problemHandler(new ValidationError([{ field: 'cursor', message: err.message }]), req, res, next);
+    if (err instanceof InvalidCursorError)
+      return problemHandler(new ValidationError([{ field: 'cursor', message: err.message }]), req, res, next);
     return problemHandler(err, req, res, next);
   }) as express.ErrorRequestHandler);
   return app;

@@ -10,7 +10,10 @@ const schema = z.object({
   DATABASE_URL: z.string().url().optional(),
   /** persistent: data kept per checkout between runs; ephemeral: a throwaway cluster (end-to-end tests). */
   DB_CLUSTER: z.enum(['persistent', 'ephemeral']).default('persistent'),
-  DATABASE_NAME: z.string().regex(/^[a-z_][a-z0-9_]*$/).default('bumperline'),
+  DATABASE_NAME: z
+    .string()
+    .regex(/^[a-z_][a-z0-9_]*$/)
+    .default('bumperline'),
   /** Public origin used in e-mailed links. */
   APP_ORIGIN: z.string().url().optional(),
   AUTH_SECRET: z.string().min(32).optional(),

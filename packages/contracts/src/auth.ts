@@ -2,7 +2,10 @@ import { z } from 'zod';
 import { requiredText, uuid } from './common.ts';
 import { roles } from './roles.ts';
 
-export const email = z.email({ error: 'must be an e-mail address' }).max(200).transform((e) => e.toLowerCase());
+export const email = z
+  .email({ error: 'must be an e-mail address' })
+  .max(200)
+  .transform((e) => e.toLowerCase());
 // NIST SP 800-63B: at least 8 characters, allow long passphrases.
 export const password = z
   .string()

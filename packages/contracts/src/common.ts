@@ -1,7 +1,11 @@
 import { z } from 'zod';
 
 export const uuid = z.uuid({ error: 'must be an id' });
-export const shortText = (max = 200) => z.string().trim().max(max, { error: `must be at most ${max} characters` });
+export const shortText = (max = 200) =>
+  z
+    .string()
+    .trim()
+    .max(max, { error: `must be at most ${max} characters` });
 export const requiredText = (max = 200) => shortText(max).min(1, { error: 'is required' });
 
 /** RFC 9457 problem details, with our field-level errors. */

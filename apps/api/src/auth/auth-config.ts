@@ -11,7 +11,6 @@ import { emailTokens, users } from '@bumperline/db/schema/index';
 import { hashToken } from './tokens.ts';
 import type { SignInLimiter } from './sign-in-limiter.ts';
 
-
 export function buildAuthConfig(opts: { db: Db; secret: string; secureCookies: boolean; limiter: SignInLimiter }): ExpressAuthConfig {
   const { db, limiter } = opts;
   return {

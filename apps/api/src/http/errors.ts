@@ -36,7 +36,10 @@ export class ForbiddenError extends HttpError {
 }
 
 export class ConflictError extends HttpError {
-  constructor(detail: string, readonly current?: unknown) {
+  constructor(
+    detail: string,
+    readonly current?: unknown,
+  ) {
     super(409, 'Conflict', detail, undefined, 'conflict');
   }
 }

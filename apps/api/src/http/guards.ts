@@ -34,11 +34,7 @@ export function requirePermission(req: Request, permission: Permission): TenantA
  * (with `status`), after its transaction has committed.
  */
 export function makeScoped(db: Db) {
-  return function scoped<T>(
-    permission: Permission,
-    handler: (ctx: ScopedContext) => Promise<T>,
-    status = 200,
-  ): RequestHandler {
+  return function scoped<T>(permission: Permission, handler: (ctx: ScopedContext) => Promise<T>, status = 200): RequestHandler {
     return async (req, res) => {
       const actor = requirePermission(req, permission);
       const later: (() => Promise<void>)[] = [];

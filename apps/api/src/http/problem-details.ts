@@ -30,7 +30,13 @@ export const problemHandler: ErrorRequestHandler = (err, req, res, _next) => {
   let e: HttpError;
   if (err instanceof HttpError) e = err;
   else if ((err as { type?: string }).type === 'entity.parse.failed') {
-    e = new HttpError(400, 'Malformed JSON', 'The request body is not valid JSON.', [{ field: '(body)', message: 'is not valid JSON' }], 'malformed');
+    e = new HttpError(
+      400,
+      'Malformed JSON',
+      'The request body is not valid JSON.',
+      [{ field: '(body)', message: 'is not valid JSON' }],
+      'malformed',
+    );
   } else if ((err as { type?: string }).type === 'entity.too.large') {
     e = new HttpError(413, 'Request too large', 'The request body is too large.', undefined, 'too-large');
   } else if (isDatabaseDown(err)) e = new ServiceUnavailableError();

@@ -3,13 +3,7 @@
 import { randomUUID } from 'node:crypto';
 import { Router } from 'express';
 import { and, eq, gt, isNull } from 'drizzle-orm';
-import {
-  passwordResetConfirm,
-  passwordResetRequest,
-  signUpInput,
-  switchCompanyInput,
-  type Me,
-} from '@bumperline/contracts/auth';
+import { passwordResetConfirm, passwordResetRequest, signUpInput, switchCompanyInput, type Me } from '@bumperline/contracts/auth';
 import { withScope, type Db } from '@bumperline/db/client';
 import { emailTokens, memberships, tenants, users } from '@bumperline/db/schema/index';
 import { findUserByEmail, listCompaniesOf, revokeAllSessionsOf, setActiveCompany } from '@bumperline/db/queries/identity';
@@ -83,7 +77,9 @@ export function accountRouter(deps: { db: Db; mailer: Mailer; appOrigin: string 
     const user = await findUserByEmail(db, email);
     if (user) {
       const { token, hash } = newToken();
-      await db.insert(emailTokens).values({ tokenHash: hash, purpose: 'password-reset', userId: user.id, expiresAt: new Date(Date.now() + RESET_TTL_MS) });
+      await db
+        .insert(emailTokens)
+        .values({ tokenHash: hash, purpose: 'password-reset', userId: user.id, expiresAt: new Date(Date.now() + RESET_TTL_MS) });
       const link = appLink(appOrigin, `/reset-password?token=${token}`);
       await mailer.send({
         to: user.email,
@@ -126,7 +122,9 @@ export function accountRouter(deps: { db: Db; mailer: Mailer; appOrigin: string 
     const user = await findUserByEmail(db, email);
     if (user) {
       const { token, hash } = newToken();
-      await db.insert(emailTokens).values({ tokenHash: hash, purpose: 'sign-in', userId: user.id, expiresAt: new Date(Date.now() + LINK_TTL_MS) });
+      await db
+        .insert(emailTokens)
+        .values({ tokenHash: hash, purpose: 'sign-in', userId: user.id, expiresAt: new Date(Date.now() + LINK_TTL_MS) });
       const link = appLink(appOrigin, `/sign-in/link?token=${token}`);
       await mailer.send({
         to: user.email,
@@ -139,4 +137,3 @@ export function accountRouter(deps: { db: Db; mailer: Mailer; appOrigin: string 
 
   return r;
 }
-

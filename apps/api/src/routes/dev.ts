@@ -15,12 +15,14 @@ export function devRouter(mail: MailFake): Router {
     const rows = mail
       .messages()
       .map(
-        (m) => `<article><header><h2>${escapeHtml(m.subject)}</h2><p>To ${escapeHtml(m.to.join(', '))} · ${escapeHtml(
-          new Date(m.at).toLocaleString('en-US'),
-        )}</p></header><pre>${linkify(m.text)}</pre></article>`,
+        (m) =>
+          `<article><header><h2>${escapeHtml(m.subject)}</h2><p>To ${escapeHtml(m.to.join(', '))} · ${escapeHtml(
+            new Date(m.at).toLocaleString('en-US'),
+          )}</p></header><pre>${linkify(m.text)}</pre></article>`,
       )
       .join('');
-    res.type('html').send(`<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1">
+    res.type('html')
+      .send(`<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1">
 <title>Captured e-mail · Bumperline development</title>
 <style>body{font-family:system-ui,sans-serif;max-width:48rem;margin:2rem auto;padding:0 1rem;color:#111827;background:#f8fafc}
 article{background:#fff;border:1px solid #cbd5e1;border-radius:.5rem;padding:1rem;margin:1rem 0}h1{font-size:1.4rem}h2{font-size:1.1rem;margin:0}

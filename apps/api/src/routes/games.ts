@@ -1,6 +1,15 @@
 import { Router } from 'express';
 import { gameInput, gameListQuery, gameModelInput, gameUpdate } from '@bumperline/contracts/games';
-import { countGamesByStatus, getGame, getModel, insertGame, insertModel, listGames, listModels, updateGame } from '@bumperline/db/queries/games';
+import {
+  countGamesByStatus,
+  getGame,
+  getModel,
+  insertGame,
+  insertModel,
+  listGames,
+  listModels,
+  updateGame,
+} from '@bumperline/db/queries/games';
 import { getVenue } from '@bumperline/db/queries/venues';
 import { recordAudit } from '@bumperline/db/queries/audit';
 import type { Tx } from '@bumperline/db/client';
@@ -24,7 +33,10 @@ async function checkReferences(tx: Tx, refs: { modelId?: string; venueId?: strin
 export function gamesRouter(scoped: ReturnType<typeof makeScoped>): Router {
   const r = Router();
 
-  r.get('/', scoped('games:read', ({ tx, req }) => listGames(tx, parse(gameListQuery, req.query))));
+  r.get(
+    '/',
+    scoped('games:read', ({ tx, req }) => listGames(tx, parse(gameListQuery, req.query))),
+  );
 
   r.get(
     '/summary',
@@ -95,7 +107,10 @@ export function gamesRouter(scoped: ReturnType<typeof makeScoped>): Router {
 
 export function modelsRouter(scoped: ReturnType<typeof makeScoped>): Router {
   const r = Router();
-  r.get('/', scoped('games:read', async ({ tx }) => ({ items: await listModels(tx) })));
+  r.get(
+    '/',
+    scoped('games:read', async ({ tx }) => ({ items: await listModels(tx) })),
+  );
   r.post(
     '/',
     scoped(

@@ -4,8 +4,17 @@ import { acceptInvitationInput, invitationInput, memberRoleUpdate } from '@bumpe
 import { roleLabels } from '@bumperline/contracts/roles';
 import { withScope, type Db } from '@bumperline/db/client';
 import {
-  addMember, countOwners, findInvitationByTokenHash, getMember, insertInvitation, listMembers,
-  listOpenInvitations, markInvitationAccepted, removeMember, revokeInvitation, setMemberRole,
+  addMember,
+  countOwners,
+  findInvitationByTokenHash,
+  getMember,
+  insertInvitation,
+  listMembers,
+  listOpenInvitations,
+  markInvitationAccepted,
+  removeMember,
+  revokeInvitation,
+  setMemberRole,
 } from '@bumperline/db/queries/team';
 import { findUserByEmail, setActiveCompany } from '@bumperline/db/queries/identity';
 import { recordAudit } from '@bumperline/db/queries/audit';
@@ -44,7 +53,13 @@ export function teamRouter(deps: { scoped: ReturnType<typeof makeScoped>; mailer
           invitedBy: actor.userId,
           expiresAt: new Date(Date.now() + INVITE_TTL_MS),
         });
-        await recordAudit(tx, { actorUserId: actor.userId, action: 'invite', entity: 'invitation', entityId: id, after: { email: input.email, role: input.role } });
+        await recordAudit(tx, {
+          actorUserId: actor.userId,
+          action: 'invite',
+          entity: 'invitation',
+          entityId: id,
+          after: { email: input.email, role: input.role },
+        });
         const link = appLink(appOrigin, `/invitation?token=${token}`);
         afterCommit(() =>
           mailer.send({
@@ -80,7 +95,14 @@ export function teamRouter(deps: { scoped: ReturnType<typeof makeScoped>; mailer
         throw new ConflictError('A company needs at least one owner.');
       }
       await setMemberRole(tx, userId, role);
-      await recordAudit(tx, { actorUserId: actor.userId, action: 'update', entity: 'member', entityId: userId, before: { role: member.role }, after: { role } });
+      await recordAudit(tx, {
+        actorUserId: actor.userId,
+        action: 'update',
+        entity: 'member',
+        entityId: userId,
+        before: { role: member.role },
+        after: { role },
+      });
       return { userId, role };
     }),
   );
@@ -93,7 +115,13 @@ export function teamRouter(deps: { scoped: ReturnType<typeof makeScoped>; mailer
       if (!member) throw new NotFoundError('member');
       if (member.role === 'owner' && (await countOwners(tx)) <= 1) throw new ConflictError('A company needs at least one owner.');
       await removeMember(tx, userId);
-      await recordAudit(tx, { actorUserId: actor.userId, action: 'remove', entity: 'member', entityId: userId, before: { role: member.role } });
+      await recordAudit(tx, {
+        actorUserId: actor.userId,
+        action: 'remove',
+        entity: 'member',
+        entityId: userId,
+        before: { role: member.role },
+      });
       return undefined;
     }),
   );
@@ -108,9 +136,12 @@ export function invitationsRouter(db: Db): Router {
   async function lookup(token: string) {
     const inv = await withScope(db, {}, (tx) => findInvitationByTokenHash(tx, hashToken(token)));
     if (!inv) throw new NotFoundError('invitation');
-    if (inv.revoked_at) throw new HttpError(410, 'Invitation withdrawn', 'This invitation was withdrawn. Ask for a new one.', undefined, 'gone');
-    if (inv.accepted_at) throw new HttpError(410, 'Invitation used', 'This invitation was already accepted. Sign in instead.', undefined, 'gone');
-    if (new Date(inv.expires_at) < new Date()) throw new HttpError(410, 'Invitation expired', 'This invitation has expired. Ask for a new one.', undefined, 'gone');
+    if (inv.revoked_at)
+      throw new HttpError(410, 'Invitation withdrawn', 'This invitation was withdrawn. Ask for a new one.', undefined, 'gone');
+    if (inv.accepted_at)
+      throw new HttpError(410, 'Invitation used', 'This invitation was already accepted. Sign in instead.', undefined, 'gone');
+    if (new Date(inv.expires_at) < new Date())
+      throw new HttpError(410, 'Invitation expired', 'This invitation has expired. Ask for a new one.', undefined, 'gone');
     return inv;
   }
 

@@ -10,7 +10,10 @@ import type { makeScoped } from '../http/guards.ts';
 export function venuesRouter(scoped: ReturnType<typeof makeScoped>): Router {
   const r = Router();
 
-  r.get('/', scoped('venues:read', ({ tx, req }) => listVenues(tx, parse(venueListQuery, req.query))));
+  r.get(
+    '/',
+    scoped('venues:read', ({ tx, req }) => listVenues(tx, parse(venueListQuery, req.query))),
+  );
 
   r.get(
     '/:id',

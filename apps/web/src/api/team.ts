@@ -29,5 +29,6 @@ function useTeamMutation<V>(fn: (v: V) => Promise<unknown>) {
 
 export const useInvite = () => useTeamMutation((v: InvitationInput) => post('/api/team/invitations', v));
 export const useRevokeInvitation = () => useTeamMutation((id: string) => del(`/api/team/invitations/${id}`));
-export const useChangeRole = () => useTeamMutation((v: { userId: string; role: Role }) => patch(`/api/team/members/${v.userId}`, { role: v.role }));
+export const useChangeRole = () =>
+  useTeamMutation((v: { userId: string; role: Role }) => patch(`/api/team/members/${v.userId}`, { role: v.role }));
 export const useRemoveMember = () => useTeamMutation((userId: string) => del(`/api/team/members/${userId}`));

@@ -15,8 +15,7 @@ export const listVenues = (q: VenueListQuery) => get<Page<Venue>>('/api/venues',
 export const venueListQuery = (q: VenueListQuery) =>
   queryOptions({ queryKey: venueKeys.list(q), queryFn: () => listVenues(q), placeholderData: keepPreviousData });
 
-export const venueQuery = (id: string) =>
-  queryOptions({ queryKey: venueKeys.detail(id), queryFn: () => get<Venue>(`/api/venues/${id}`) });
+export const venueQuery = (id: string) => queryOptions({ queryKey: venueKeys.detail(id), queryFn: () => get<Venue>(`/api/venues/${id}`) });
 
 export const useVenues = (q: VenueListQuery) => useQuery(venueListQuery(q));
 export const useVenue = (id: string) => useQuery(venueQuery(id));
@@ -36,8 +35,7 @@ export async function allVenues(q: Omit<VenueListQuery, 'cursor' | 'limit'>): Pr
 export function useSaveVenue(id?: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: VenueInput | VenueUpdate) =>
-      id ? patch<Venue>(`/api/venues/${id}`, body) : post<Venue>('/api/venues', body),
+    mutationFn: (body: VenueInput | VenueUpdate) => (id ? patch<Venue>(`/api/venues/${id}`, body) : post<Venue>('/api/venues', body)),
     onSuccess: (venue) => {
       qc.setQueryData(venueKeys.detail(venue.id), venue);
       return qc.invalidateQueries({ queryKey: venueKeys.all });

@@ -45,16 +45,86 @@ export const router = createBrowserRouter([
     ),
     children: [
       { path: paths.today, element: <HomePage /> },
-      { path: paths.venues, element: <RequirePermission permission="venues:read"><VenuesPage /></RequirePermission> },
-      { path: paths.newVenue, element: <RequirePermission permission="venues:write"><NewVenuePage /></RequirePermission> },
-      { path: '/venues/:id', element: <RequirePermission permission="venues:read"><VenuePage /></RequirePermission> },
-      { path: '/venues/:id/edit', element: <RequirePermission permission="venues:write"><EditVenuePage /></RequirePermission> },
-      { path: paths.games, element: <RequirePermission permission="games:read"><GamesPage /></RequirePermission> },
-      { path: paths.newGame, element: <RequirePermission permission="games:write"><NewGamePage /></RequirePermission> },
-      { path: '/games/:id', element: <RequirePermission permission="games:read"><GamePage /></RequirePermission> },
-      { path: '/games/:id/edit', element: <RequirePermission permission="games:write"><EditGamePage /></RequirePermission> },
-      { path: paths.team, element: <RequirePermission permission="team:read"><TeamPage /></RequirePermission> },
-      { path: paths.activity, element: <RequirePermission permission="audit:read"><ActivityPage /></RequirePermission> },
+      {
+        path: paths.venues,
+        element: (
+          <RequirePermission permission="venues:read">
+            <VenuesPage />
+          </RequirePermission>
+        ),
+      },
+      {
+        path: paths.newVenue,
+        element: (
+          <RequirePermission permission="venues:write">
+            <NewVenuePage />
+          </RequirePermission>
+        ),
+      },
+      {
+        path: '/venues/:id',
+        element: (
+          <RequirePermission permission="venues:read">
+            <VenuePage />
+          </RequirePermission>
+        ),
+      },
+      {
+        path: '/venues/:id/edit',
+        element: (
+          <RequirePermission permission="venues:write">
+            <EditVenuePage />
+          </RequirePermission>
+        ),
+      },
+      {
+        path: paths.games,
+        element: (
+          <RequirePermission permission="games:read">
+            <GamesPage />
+          </RequirePermission>
+        ),
+      },
+      {
+        path: paths.newGame,
+        element: (
+          <RequirePermission permission="games:write">
+            <NewGamePage />
+          </RequirePermission>
+        ),
+      },
+      {
+        path: '/games/:id',
+        element: (
+          <RequirePermission permission="games:read">
+            <GamePage />
+          </RequirePermission>
+        ),
+      },
+      {
+        path: '/games/:id/edit',
+        element: (
+          <RequirePermission permission="games:write">
+            <EditGamePage />
+          </RequirePermission>
+        ),
+      },
+      {
+        path: paths.team,
+        element: (
+          <RequirePermission permission="team:read">
+            <TeamPage />
+          </RequirePermission>
+        ),
+      },
+      {
+        path: paths.activity,
+        element: (
+          <RequirePermission permission="audit:read">
+            <ActivityPage />
+          </RequirePermission>
+        ),
+      },
       { path: '*', element: <NotFoundPage /> },
     ],
   },

@@ -18,7 +18,13 @@ function show(v: unknown): string {
   return String(v);
 }
 
-export function ActivityList({ items, locale }: { items: ActivityEntry[]; locale?: { locale: string; timeZone: string; currency: string } }) {
+export function ActivityList({
+  items,
+  locale,
+}: {
+  items: ActivityEntry[];
+  locale?: { locale: string; timeZone: string; currency: string };
+}) {
   return (
     <ol className="grid gap-3">
       {items.map((e) => {

@@ -44,7 +44,12 @@ export interface DataTableProps<T, S extends string> {
 export function DataTable<T, S extends string>(p: DataTableProps<T, S>) {
   const [draft, setDraft] = useState(p.search);
   const [exporting, setExporting] = useState(false);
-  useEffect(() => setDraft(p.search), [p.search]);
+  // When the search changes from outside (back button, a link), show it in the box.
+  const [shownSearch, setShownSearch] = useState(p.search);
+  if (p.search !== shownSearch) {
+    setShownSearch(p.search);
+    setDraft(p.search);
+  }
   // Search as the person types, without a request per keystroke.
   useEffect(() => {
     if (draft === p.search) return;
@@ -110,10 +115,18 @@ export function DataTable<T, S extends string>(p: DataTableProps<T, S>) {
                     aria-sort={c.sort && c.sort === p.sort ? (p.order === 'asc' ? 'ascending' : 'descending') : undefined}
                   >
                     {c.sort ? (
-                      <button type="button" className="inline-flex items-center gap-1 font-bold hover:text-ink" onClick={() => p.onSort(c.sort!)}>
+                      <button
+                        type="button"
+                        className="inline-flex items-center gap-1 font-bold hover:text-ink"
+                        onClick={() => p.onSort(c.sort!)}
+                      >
                         {c.header}
                         {c.sort === p.sort ? (
-                          p.order === 'asc' ? <ArrowUp aria-hidden className="size-4" /> : <ArrowDown aria-hidden className="size-4" />
+                          p.order === 'asc' ? (
+                            <ArrowUp aria-hidden className="size-4" />
+                          ) : (
+                            <ArrowDown aria-hidden className="size-4" />
+                          )
                         ) : (
                           <ArrowUpDown aria-hidden className="size-4 opacity-50" />
                         )}

@@ -2,7 +2,11 @@
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
 import { ApiError } from '../lib/api-client.ts';
 
-export function applyServerErrors<T extends FieldValues>(err: unknown, setError: UseFormSetError<T>, known: readonly string[]): string | null {
+export function applyServerErrors<T extends FieldValues>(
+  err: unknown,
+  setError: UseFormSetError<T>,
+  known: readonly string[],
+): string | null {
   if (!(err instanceof ApiError)) return 'Something went wrong. Try again.';
   const unplaced: string[] = [];
   for (const e of err.problem.errors ?? []) {

@@ -51,10 +51,8 @@ export function useListParams<S extends string>(defaultSort: S, extraKeys: strin
     extras,
     setSearch: (q: string) => update({ q }),
     setFilter: (key: string, value: string) => update({ [key]: value }),
-    toggleSort: (sort: S) =>
-      update({ sort, order: params.sort === sort && params.order === 'asc' ? 'desc' : 'asc' }),
-    nextPage: (cursor: string) =>
-      update({ cursor, trail: [...params.trail, params.cursor ?? ''].join(',') }, false),
+    toggleSort: (sort: S) => update({ sort, order: params.sort === sort && params.order === 'asc' ? 'desc' : 'asc' }),
+    nextPage: (cursor: string) => update({ cursor, trail: [...params.trail, params.cursor ?? ''].join(',') }, false),
     prevPage: () => {
       const trail = [...params.trail];
       const prev = trail.pop();

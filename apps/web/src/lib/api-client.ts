@@ -38,7 +38,12 @@ export async function api<T>(method: string, path: string, opts: { body?: unknow
       body: opts.body !== undefined ? JSON.stringify(opts.body) : undefined,
     });
   } catch {
-    throw new ApiError({ type: 'about:blank', title: 'No connection', status: 0, detail: 'Could not reach Bumperline. Check the connection and try again.' });
+    throw new ApiError({
+      type: 'about:blank',
+      title: 'No connection',
+      status: 0,
+      detail: 'Could not reach Bumperline. Check the connection and try again.',
+    });
   }
   if (res.status === 204) return undefined as T;
   const body: unknown = await res.json().catch(() => null);

@@ -49,12 +49,89 @@ export const neighbourhoods: { name: string; lat: number; lon: number; city: str
   { name: 'Berwyn', lat: 41.8506, lon: -87.7937, city: 'Berwyn', zip: '60402' },
 ];
 
-const venueWords1 = ['Copper', 'Lantern', 'Velvet', 'Rusty', 'Blue Heron', 'Third Rail', 'Northside', 'Ember', 'Harbor', 'Tin Cup', 'Old Mill', 'Crooked', 'Stag', 'Foxglove', 'Drumlin', 'Magpie', 'Cobalt', 'Juniper', 'Quarry', 'Kettle'];
-const venueWords2 = ['Tap', 'Tavern', 'Lanes', 'Social Club', 'Alehouse', 'Arcade Bar', 'Lounge', 'Pub', 'Bowl', 'Diner', 'Saloon', 'Taproom'];
-export const streets = ['Larkspur Ave', 'Tamarack St', 'Cinder Row', 'Brackett Blvd', 'Wexley Ave', 'Osgood Pl', 'Fennimore St', 'Halvard Ave', 'Quill Ct', 'Rendell St', 'Marlowe Ave', 'Ashgrove Rd', 'Petrie St', 'Loomis Row'];
+const venueWords1 = [
+  'Copper',
+  'Lantern',
+  'Velvet',
+  'Rusty',
+  'Blue Heron',
+  'Third Rail',
+  'Northside',
+  'Ember',
+  'Harbor',
+  'Tin Cup',
+  'Old Mill',
+  'Crooked',
+  'Stag',
+  'Foxglove',
+  'Drumlin',
+  'Magpie',
+  'Cobalt',
+  'Juniper',
+  'Quarry',
+  'Kettle',
+];
+const venueWords2 = [
+  'Tap',
+  'Tavern',
+  'Lanes',
+  'Social Club',
+  'Alehouse',
+  'Arcade Bar',
+  'Lounge',
+  'Pub',
+  'Bowl',
+  'Diner',
+  'Saloon',
+  'Taproom',
+];
+export const streets = [
+  'Larkspur Ave',
+  'Tamarack St',
+  'Cinder Row',
+  'Brackett Blvd',
+  'Wexley Ave',
+  'Osgood Pl',
+  'Fennimore St',
+  'Halvard Ave',
+  'Quill Ct',
+  'Rendell St',
+  'Marlowe Ave',
+  'Ashgrove Rd',
+  'Petrie St',
+  'Loomis Row',
+];
 
-const contactFirst = ['Rosalind', 'Tobias', 'Marisol', 'Desmond', 'Ingrid', 'Lamar', 'Yusuf', 'Greta', 'Colm', 'Anika', 'Bartholomew', 'Soledad', 'Emeka', 'Wren'];
-const contactLast = ['Halvorsen', 'Okonkwo', 'Prendergast', 'Zielinski', 'Abernathy', 'Villanueva', 'Thistlewood', 'Mbeki', 'Castellano', 'Fairbairn', 'Novak', 'Quintero'];
+const contactFirst = [
+  'Rosalind',
+  'Tobias',
+  'Marisol',
+  'Desmond',
+  'Ingrid',
+  'Lamar',
+  'Yusuf',
+  'Greta',
+  'Colm',
+  'Anika',
+  'Bartholomew',
+  'Soledad',
+  'Emeka',
+  'Wren',
+];
+const contactLast = [
+  'Halvorsen',
+  'Okonkwo',
+  'Prendergast',
+  'Zielinski',
+  'Abernathy',
+  'Villanueva',
+  'Thistlewood',
+  'Mbeki',
+  'Castellano',
+  'Fairbairn',
+  'Novak',
+  'Quintero',
+];
 
 export function contactName(i: number): string {
   return `${contactFirst[(i * 3) % contactFirst.length]} ${contactLast[(i * 5 + 1) % contactLast.length]}`;

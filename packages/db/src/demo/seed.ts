@@ -6,8 +6,17 @@ import type { Db } from '../client.ts';
 import { gameModels, games, memberships, tenants, users, venues } from '../schema/index.ts';
 import { hashPassword } from '../passwords.ts';
 import {
-  DEMO_PASSWORD, demoCompany, demoModels, demoPeople, neighbourhoods, openingHoursFor, secondCompany,
-  secondPeople, streets, venueName, contactName,
+  DEMO_PASSWORD,
+  demoCompany,
+  demoModels,
+  demoPeople,
+  neighbourhoods,
+  openingHoursFor,
+  secondCompany,
+  secondPeople,
+  streets,
+  venueName,
+  contactName,
 } from './scenario.ts';
 import { seededRandom } from './random.ts';
 
@@ -96,9 +105,33 @@ export async function seedDemo(db: Db): Promise<boolean> {
     const [pv1, pv2, pv3] = await tx
       .insert(venues)
       .values([
-        { tenantId: secondCompany.id, name: 'Gravel Road Roadhouse', addressLine: '77 Quill Ct', city: 'Naperville', postcode: '60540', latitude: 41.7508, longitude: -88.1535 },
-        { tenantId: secondCompany.id, name: 'Silo Street Pins', addressLine: '412 Petrie St', city: 'Aurora', postcode: '60505', latitude: 41.7606, longitude: -88.3201 },
-        { tenantId: secondCompany.id, name: 'Cornerstone Bowl', addressLine: '9 Osgood Pl', city: 'Joliet', postcode: '60432', latitude: 41.525, longitude: -88.0817 },
+        {
+          tenantId: secondCompany.id,
+          name: 'Gravel Road Roadhouse',
+          addressLine: '77 Quill Ct',
+          city: 'Naperville',
+          postcode: '60540',
+          latitude: 41.7508,
+          longitude: -88.1535,
+        },
+        {
+          tenantId: secondCompany.id,
+          name: 'Silo Street Pins',
+          addressLine: '412 Petrie St',
+          city: 'Aurora',
+          postcode: '60505',
+          latitude: 41.7606,
+          longitude: -88.3201,
+        },
+        {
+          tenantId: secondCompany.id,
+          name: 'Cornerstone Bowl',
+          addressLine: '9 Osgood Pl',
+          city: 'Joliet',
+          postcode: '60432',
+          latitude: 41.525,
+          longitude: -88.0817,
+        },
       ])
       .returning({ id: venues.id });
     const [pm] = await tx

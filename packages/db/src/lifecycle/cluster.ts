@@ -102,7 +102,15 @@ export async function startCluster(opts: StartOptions): Promise<Cluster> {
     const initPw = path.join(dataDir, '..', 'init.pw');
     writeFileSync(initPw, password, { mode: 0o644 });
     const init = asServerUser(path.join(bin, 'initdb'), [
-      '-D', dataDir, '-U', 'postgres', '--auth=scram-sha-256', `--pwfile=${initPw}`, '-E', 'UTF8', '--locale=C.UTF-8',
+      '-D',
+      dataDir,
+      '-U',
+      'postgres',
+      '--auth=scram-sha-256',
+      `--pwfile=${initPw}`,
+      '-E',
+      'UTF8',
+      '--locale=C.UTF-8',
     ]);
     rmSync(initPw, { force: true });
     if (init.status !== 0) throw new Error(`initdb failed: ${init.stderr || init.stdout}`);
@@ -116,8 +124,15 @@ export async function startCluster(opts: StartOptions): Promise<Cluster> {
     asServerUser(pgCtl, ['-D', dataDir, '-m', 'fast', '-w', 'stop']);
   }
   const start = asServerUser(pgCtl, [
-    '-D', dataDir, '-w', '-t', '60', '-l', path.join(sockDir, 'server.log'),
-    '-o', `-c listen_addresses=127.0.0.1 -p ${port} -k ${sockDir} -c fsync=${opts.mode === 'ephemeral' ? 'off' : 'on'} -c max_connections=200`,
+    '-D',
+    dataDir,
+    '-w',
+    '-t',
+    '60',
+    '-l',
+    path.join(sockDir, 'server.log'),
+    '-o',
+    `-c listen_addresses=127.0.0.1 -p ${port} -k ${sockDir} -c fsync=${opts.mode === 'ephemeral' ? 'off' : 'on'} -c max_connections=200`,
     'start',
   ]);
   if (start.status !== 0) {

@@ -5,7 +5,10 @@ import { withScope } from '../client.ts';
 import { memberships, platformAdmins, tenants, userSessions, users } from '../schema/index.ts';
 
 export async function findUserByEmail(db: Db, email: string) {
-  const [u] = await db.select().from(users).where(sql`lower(${users.email}) = lower(${email})`);
+  const [u] = await db
+    .select()
+    .from(users)
+    .where(sql`lower(${users.email}) = lower(${email})`);
   return u;
 }
 
@@ -53,8 +56,5 @@ export async function loadSession(db: Db, sessionId: string) {
 }
 
 export async function setActiveCompany(db: Db, sessionId: string, tenantId: string | null): Promise<void> {
-  await db
-    .update(userSessions)
-    .set({ activeTenantId: tenantId, lastSeenAt: new Date() })
-    .where(eq(userSessions.id, sessionId));
+  await db.update(userSessions).set({ activeTenantId: tenantId, lastSeenAt: new Date() }).where(eq(userSessions.id, sessionId));
 }

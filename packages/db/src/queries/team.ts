@@ -51,16 +51,19 @@ export async function addMember(tx: Tx, userId: string, role: Role) {
 
 export async function listOpenInvitations(tx: Tx) {
   return tx
-    .select({ id: invitations.id, email: invitations.email, role: invitations.role, expiresAt: invitations.expiresAt, createdAt: invitations.createdAt })
+    .select({
+      id: invitations.id,
+      email: invitations.email,
+      role: invitations.role,
+      expiresAt: invitations.expiresAt,
+      createdAt: invitations.createdAt,
+    })
     .from(invitations)
     .where(and(eq(invitations.tenantId, currentTenant), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)))
     .orderBy(invitations.createdAt);
 }
 
-export async function insertInvitation(
-  tx: Tx,
-  v: { email: string; role: Role; tokenHash: string; invitedBy: string; expiresAt: Date },
-) {
+export async function insertInvitation(tx: Tx, v: { email: string; role: Role; tokenHash: string; invitedBy: string; expiresAt: Date }) {
   const [i] = await tx
     .insert(invitations)
     .values({ ...v, tenantId: sql`${currentTenant}` })

@@ -7,7 +7,9 @@ import { tenantIsolation } from './rls.ts';
 export const auditLog = pgTable(
   'audit_log',
   {
-    tenantId: uuid('tenant_id').notNull().references(() => tenants.id, { onDelete: 'cascade' }),
+    tenantId: uuid('tenant_id')
+      .notNull()
+      .references(() => tenants.id, { onDelete: 'cascade' }),
     id: bigserial('id', { mode: 'number' }).notNull(),
     at: timestamp('at', { withTimezone: true }).notNull().defaultNow(),
     actorUserId: uuid('actor_user_id').references(() => users.id, { onDelete: 'set null' }),

@@ -1,7 +1,5 @@
 import { sql } from 'drizzle-orm';
-import {
-  date, foreignKey, index, integer, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid,
-} from 'drizzle-orm/pg-core';
+import { date, foreignKey, index, integer, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { gameKind, gameStatus } from './enums.ts';
 import { tenants } from './tenancy.ts';
 import { venues } from './venues.ts';
@@ -10,7 +8,9 @@ import { tenantIsolation } from './rls.ts';
 export const gameModels = pgTable(
   'game_models',
   {
-    tenantId: uuid('tenant_id').notNull().references(() => tenants.id, { onDelete: 'cascade' }),
+    tenantId: uuid('tenant_id')
+      .notNull()
+      .references(() => tenants.id, { onDelete: 'cascade' }),
     id: uuid('id').notNull().defaultRandom(),
     maker: text('maker').notNull(),
     title: text('title').notNull(),
@@ -28,7 +28,9 @@ export const gameModels = pgTable(
 export const games = pgTable(
   'games',
   {
-    tenantId: uuid('tenant_id').notNull().references(() => tenants.id, { onDelete: 'cascade' }),
+    tenantId: uuid('tenant_id')
+      .notNull()
+      .references(() => tenants.id, { onDelete: 'cascade' }),
     id: uuid('id').notNull().defaultRandom(),
     modelId: uuid('model_id').notNull(),
     venueId: uuid('venue_id'),

@@ -34,8 +34,12 @@ export const tenants = pgTable(
 export const memberships = pgTable(
   'memberships',
   {
-    tenantId: uuid('tenant_id').notNull().references(() => tenants.id, { onDelete: 'cascade' }),
-    userId: uuid('user_id').notNull().references(() => users.id, { onDelete: 'cascade' }),
+    tenantId: uuid('tenant_id')
+      .notNull()
+      .references(() => tenants.id, { onDelete: 'cascade' }),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
     role: memberRole('role').notNull(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
@@ -51,7 +55,9 @@ export const memberships = pgTable(
 export const invitations = pgTable(
   'invitations',
   {
-    tenantId: uuid('tenant_id').notNull().references(() => tenants.id, { onDelete: 'cascade' }),
+    tenantId: uuid('tenant_id')
+      .notNull()
+      .references(() => tenants.id, { onDelete: 'cascade' }),
     id: uuid('id').notNull().defaultRandom(),
     email: text('email').notNull(),
     role: memberRole('role').notNull(),
@@ -62,10 +68,5 @@ export const invitations = pgTable(
     acceptedAt: timestamp('accepted_at', { withTimezone: true }),
     revokedAt: timestamp('revoked_at', { withTimezone: true }),
   },
-  (t) => [
-    primaryKey({ columns: [t.tenantId, t.id] }),
-    uniqueIndex('invitations_token_key').on(t.tokenHash),
-    tenantIsolation(t.tenantId),
-  ],
+  (t) => [primaryKey({ columns: [t.tenantId, t.id] }), uniqueIndex('invitations_token_key').on(t.tokenHash), tenantIsolation(t.tenantId)],
 ).enableRLS();
-

@@ -1,7 +1,5 @@
 import { sql } from 'drizzle-orm';
-import {
-  doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, uuid,
-} from 'drizzle-orm/pg-core';
+import { doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { tenants } from './tenancy.ts';
 import { tenantIsolation } from './rls.ts';
 
@@ -11,7 +9,9 @@ export type OpeningHours = Partial<Record<'1' | '2' | '3' | '4' | '5' | '6' | '7
 export const venues = pgTable(
   'venues',
   {
-    tenantId: uuid('tenant_id').notNull().references(() => tenants.id, { onDelete: 'cascade' }),
+    tenantId: uuid('tenant_id')
+      .notNull()
+      .references(() => tenants.id, { onDelete: 'cascade' }),
     id: uuid('id').notNull().defaultRandom(),
     name: text('name').notNull(),
     addressLine: text('address_line').notNull(),

@@ -46,7 +46,7 @@ export function tourLength(matrix: Matrix, order: readonly number[]): number {
 
 /** The default effort: enough kicks that 50–100 points land within about 1 % of optimal in well under 200 ms. */
 export function defaultKicks(n: number): number {
-  return Math.min(4000, Math.max(200, 25 * n));
+  return Math.min(3000, Math.max(300, 15 * n));
 }
 
 export function planTour(matrix: Matrix, options: TourOptions = {}): Tour {

@@ -32,7 +32,10 @@ export function InvitationPage() {
   const me = useMe();
   const info = useQuery({ queryKey: ['invitation', token], queryFn: () => get<InvitationInfo>(`/api/invitations/${token}`), retry: false });
   const [formError, setFormError] = useState<string | null>(null);
-  const form = useForm<z.input<typeof newAccount>, unknown, z.output<typeof newAccount>>({ resolver: zodResolver(newAccount), defaultValues: { name: '', password: '' } });
+  const form = useForm<z.input<typeof newAccount>, unknown, z.output<typeof newAccount>>({
+    resolver: zodResolver(newAccount),
+    defaultValues: { name: '', password: '' },
+  });
 
   async function accept(body: object, signInAfter?: { email: string; password: string }) {
     setFormError(null);
@@ -46,8 +49,18 @@ export function InvitationPage() {
     }
   }
 
-  if (info.isLoading || me.isLoading) return <AuthLayout title="Invitation"><Loading /></AuthLayout>;
-  if (info.error || !info.data) return <AuthLayout title="Invitation"><ErrorState error={info.error} /></AuthLayout>;
+  if (info.isLoading || me.isLoading)
+    return (
+      <AuthLayout title="Invitation">
+        <Loading />
+      </AuthLayout>
+    );
+  if (info.error || !info.data)
+    return (
+      <AuthLayout title="Invitation">
+        <ErrorState error={info.error} />
+      </AuthLayout>
+    );
   const inv = info.data;
   const signedInAsInvitee = me.data?.user.email.toLowerCase() === inv.email.toLowerCase();
 
@@ -72,11 +85,7 @@ export function InvitationPage() {
           </p>
         )
       ) : (
-        <form
-          noValidate
-          className="grid gap-4"
-          onSubmit={form.handleSubmit((v) => accept(v, { email: inv.email, password: v.password }))}
-        >
+        <form noValidate className="grid gap-4" onSubmit={form.handleSubmit((v) => accept(v, { email: inv.email, password: v.password }))}>
           <Field label="Your name" error={fieldMessage(form.formState.errors.name?.message)}>
             {(a) => <input {...a} className={inputClass} autoComplete="name" {...form.register('name')} />}
           </Field>

@@ -16,7 +16,11 @@ export function LinkSignInPage() {
     <AuthLayout title="Sign in to Bumperline">
       {state === 'failed' && (
         <FormAlert>
-          This link has expired or was already used. <Link className="underline" to={paths.signInLink}>Ask for a new one</Link>.
+          This link has expired or was already used.{' '}
+          <Link className="underline" to={paths.signInLink}>
+            Ask for a new one
+          </Link>
+          .
         </FormAlert>
       )}
       <button

@@ -51,14 +51,20 @@ export function RequestLinkPage({ kind }: { kind: 'password-reset' | 'sign-in-li
   );
 }
 
-const resetForm = z.object({ password }).extend({ confirm: z.string() }).refine((v) => v.password === v.confirm, { path: ['confirm'], error: 'does not match the password' });
+const resetForm = z
+  .object({ password })
+  .extend({ confirm: z.string() })
+  .refine((v) => v.password === v.confirm, { path: ['confirm'], error: 'does not match the password' });
 
 export function ResetPasswordPage() {
   const [sp] = useSearchParams();
   const token = sp.get('token') ?? '';
   const [done, setDone] = useState(false);
   const [formError, setFormError] = useState<string | null>(null);
-  const form = useForm<z.input<typeof resetForm>, unknown, z.output<typeof resetForm>>({ resolver: zodResolver(resetForm), defaultValues: { password: '', confirm: '' } });
+  const form = useForm<z.input<typeof resetForm>, unknown, z.output<typeof resetForm>>({
+    resolver: zodResolver(resetForm),
+    defaultValues: { password: '', confirm: '' },
+  });
   const { register, handleSubmit, formState, setError } = form;
   const onSubmit = handleSubmit(async ({ password: pw }) => {
     setFormError(null);
@@ -73,7 +79,10 @@ export function ResetPasswordPage() {
     <AuthLayout title="Choose a new password">
       {done ? (
         <FormAlert tone="ok">
-          Your password is changed and other devices are signed out. <Link className="underline" to={paths.signIn}>Sign in</Link>
+          Your password is changed and other devices are signed out.{' '}
+          <Link className="underline" to={paths.signIn}>
+            Sign in
+          </Link>
         </FormAlert>
       ) : (
         <form onSubmit={onSubmit} noValidate className="grid gap-4">

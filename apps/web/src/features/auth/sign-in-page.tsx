@@ -18,7 +18,10 @@ export function SignInPage() {
   const [sp] = useSearchParams();
   const qc = useQueryClient();
   const [failed, setFailed] = useState(false);
-  const form = useForm<z.input<typeof signInForm>, unknown, z.output<typeof signInForm>>({ resolver: zodResolver(signInForm), defaultValues: { email: '', password: '' } });
+  const form = useForm<z.input<typeof signInForm>, unknown, z.output<typeof signInForm>>({
+    resolver: zodResolver(signInForm),
+    defaultValues: { email: '', password: '' },
+  });
   const { register, handleSubmit, formState } = form;
 
   const onSubmit = handleSubmit(async ({ email: e, password }) => {
@@ -34,11 +37,16 @@ export function SignInPage() {
       title="Sign in"
       footer={
         <p>
-          New operator? <Link className="font-bold text-brass-bright underline" to={paths.signUp}>Start a free trial</Link>
+          New operator?{' '}
+          <Link className="font-bold text-brass-bright underline" to={paths.signUp}>
+            Start a free trial
+          </Link>
         </p>
       }
     >
-      {failed && <FormAlert>That e-mail and password do not match, or there were too many attempts. Wait a few minutes and try again.</FormAlert>}
+      {failed && (
+        <FormAlert>That e-mail and password do not match, or there were too many attempts. Wait a few minutes and try again.</FormAlert>
+      )}
       <form onSubmit={onSubmit} noValidate className="grid gap-4">
         <Field label="E-mail" error={fieldMessage(formState.errors.email?.message)}>
           {(a) => <input {...a} type="email" autoComplete="username" className={inputClass} {...register('email')} />}

@@ -12,7 +12,19 @@ import { signInWithPassword } from '../../lib/auth-client.ts';
 import { paths } from '../../app/paths.ts';
 import { AuthLayout, FormAlert } from './auth-layout.tsx';
 
-const zones = ['America/Chicago', 'America/New_York', 'America/Denver', 'America/Los_Angeles', 'America/Phoenix', 'America/Anchorage', 'Pacific/Honolulu', 'America/Toronto', 'Europe/London', 'Europe/Berlin', 'Australia/Sydney'];
+const zones = [
+  'America/Chicago',
+  'America/New_York',
+  'America/Denver',
+  'America/Los_Angeles',
+  'America/Phoenix',
+  'America/Anchorage',
+  'Pacific/Honolulu',
+  'America/Toronto',
+  'Europe/London',
+  'Europe/Berlin',
+  'Australia/Sydney',
+];
 
 export function SignUpPage() {
   const navigate = useNavigate();
@@ -21,7 +33,14 @@ export function SignUpPage() {
   const defaultZone = Intl.DateTimeFormat().resolvedOptions().timeZone;
   const form = useForm<z.input<typeof signUpInput>, unknown, z.output<typeof signUpInput>>({
     resolver: zodResolver(signUpInput),
-    defaultValues: { companyName: '', name: '', email: '', password: '', timeZone: zones.includes(defaultZone) ? defaultZone : 'America/Chicago', currency: 'USD' },
+    defaultValues: {
+      companyName: '',
+      name: '',
+      email: '',
+      password: '',
+      timeZone: zones.includes(defaultZone) ? defaultZone : 'America/Chicago',
+      currency: 'USD',
+    },
   });
   const { register, handleSubmit, formState, setError } = form;
   const errors = formState.errors;
@@ -43,7 +62,10 @@ export function SignUpPage() {
       title="Start your operator company"
       footer={
         <p>
-          Already on Bumperline? <Link className="font-bold text-brass-bright underline" to={paths.signIn}>Sign in</Link>
+          Already on Bumperline?{' '}
+          <Link className="font-bold text-brass-bright underline" to={paths.signIn}>
+            Sign in
+          </Link>
         </p>
       }
     >
@@ -58,7 +80,11 @@ export function SignUpPage() {
         <Field label="E-mail" error={fieldMessage(errors.email?.message)}>
           {(a) => <input {...a} type="email" className={inputClass} autoComplete="email" {...register('email')} />}
         </Field>
-        <Field label="Password" hint="At least 10 characters; a phrase is easiest to remember." error={fieldMessage(errors.password?.message)}>
+        <Field
+          label="Password"
+          hint="At least 10 characters; a phrase is easiest to remember."
+          error={fieldMessage(errors.password?.message)}
+        >
           {(a) => <input {...a} type="password" className={inputClass} autoComplete="new-password" {...register('password')} />}
         </Field>
         <div className="grid grid-cols-[2fr_1fr] gap-3">

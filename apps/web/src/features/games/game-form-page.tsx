@@ -3,7 +3,15 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import type { z } from 'zod';
-import { gameInput, gameKindLabels, gameKinds, gameModelInput, gameStatusLabels, gameStatuses, type Game } from '@bumperline/contracts/games';
+import {
+  gameInput,
+  gameKindLabels,
+  gameKinds,
+  gameModelInput,
+  gameStatusLabels,
+  gameStatuses,
+  type Game,
+} from '@bumperline/contracts/games';
 import { Field, inputClass } from '../../components/field.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
 import { ErrorState, Loading } from '../../components/states.tsx';
@@ -32,7 +40,15 @@ export function EditGamePage() {
 
 function toForm(g?: Game, venueId?: string): FormIn {
   return g
-    ? { modelId: g.modelId, venueId: g.venueId, serial: g.serial, status: g.status, installedOn: g.installedOn, pricePerPlayCents: g.pricePerPlayCents, notes: g.notes }
+    ? {
+        modelId: g.modelId,
+        venueId: g.venueId,
+        serial: g.serial,
+        status: g.status,
+        installedOn: g.installedOn,
+        pricePerPlayCents: g.pricePerPlayCents,
+        notes: g.notes,
+      }
     : { modelId: '', venueId: venueId ?? null, serial: '', status: 'running', installedOn: null, pricePerPlayCents: 100, notes: '' };
 }
 
@@ -71,7 +87,10 @@ function GameForm({ game, presetVenueId }: { game?: Game; presetVenueId?: string
             </div>
           )}
           <div className="grid gap-4 sm:grid-cols-[1fr_auto] sm:items-end">
-            <Field label="Model" error={fieldMessage(errors.modelId?.message === 'must be an id' ? 'Choose a model' : errors.modelId?.message)}>
+            <Field
+              label="Model"
+              error={fieldMessage(errors.modelId?.message === 'must be an id' ? 'Choose a model' : errors.modelId?.message)}
+            >
               {(a) => (
                 <select {...a} className={inputClass} {...register('modelId')}>
                   <option value="">Choose a model…</option>
@@ -116,10 +135,18 @@ function GameForm({ game, presetVenueId }: { game?: Game; presetVenueId?: string
               )}
             </Field>
             <Field label="Installed on" error={fieldMessage(errors.installedOn?.message)}>
-              {(a) => <input {...a} type="date" className={inputClass} {...register('installedOn', { setValueAs: (v: string) => v || null })} />}
+              {(a) => (
+                <input {...a} type="date" className={inputClass} {...register('installedOn', { setValueAs: (v: string) => v || null })} />
+              )}
             </Field>
-            <Field label="Price per play (cents)" hint="For example 100 for one dollar" error={fieldMessage(errors.pricePerPlayCents?.message)}>
-              {(a) => <input {...a} inputMode="numeric" className={inputClass} {...register('pricePerPlayCents', { valueAsNumber: true })} />}
+            <Field
+              label="Price per play (cents)"
+              hint="For example 100 for one dollar"
+              error={fieldMessage(errors.pricePerPlayCents?.message)}
+            >
+              {(a) => (
+                <input {...a} inputMode="numeric" className={inputClass} {...register('pricePerPlayCents', { valueAsNumber: true })} />
+              )}
             </Field>
           </div>
           <Field label="Notes" error={fieldMessage(errors.notes?.message)}>
@@ -134,7 +161,14 @@ function GameForm({ game, presetVenueId }: { game?: Game; presetVenueId?: string
             </Link>
           </div>
         </form>
-        {addingModel && <NewModelForm onCreated={(id) => { setValue('modelId', id); setAddingModel(false); }} />}
+        {addingModel && (
+          <NewModelForm
+            onCreated={(id) => {
+              setValue('modelId', id);
+              setAddingModel(false);
+            }}
+          />
+        )}
       </div>
     </>
   );
@@ -159,7 +193,11 @@ function NewModelForm({ onCreated }: { onCreated: (id: string) => void }) {
   return (
     <form onSubmit={onSubmit} noValidate className="card grid gap-4" aria-label="New game model">
       <h2 className="text-lg font-bold">New game model</h2>
-      {formError && <p role="alert" className="font-semibold text-down">{formError}</p>}
+      {formError && (
+        <p role="alert" className="font-semibold text-down">
+          {formError}
+        </p>
+      )}
       <div className="grid gap-4 sm:grid-cols-2">
         <Field label="Maker" error={fieldMessage(formState.errors.maker?.message)}>
           {(a) => <input {...a} className={inputClass} {...register('maker')} />}
@@ -179,7 +217,14 @@ function NewModelForm({ onCreated }: { onCreated: (id: string) => void }) {
           )}
         </Field>
         <Field label="Year" error={fieldMessage(formState.errors.year?.message)}>
-          {(a) => <input {...a} inputMode="numeric" className={inputClass} {...register('year', { setValueAs: (v: string) => (v === '' ? null : Number(v)) })} />}
+          {(a) => (
+            <input
+              {...a}
+              inputMode="numeric"
+              className={inputClass}
+              {...register('year', { setValueAs: (v: string) => (v === '' ? null : Number(v)) })}
+            />
+          )}
         </Field>
       </div>
       <button type="submit" className="btn-primary justify-self-start" disabled={formState.isSubmitting}>

@@ -31,7 +31,8 @@ export function GamePage() {
         title={g.model.title}
         subtitle={
           <span className="inline-flex flex-wrap items-center gap-2">
-            <StatusBadge status={g.status} /> {g.model.maker} · {gameKindLabels[g.model.kind]} · serial <span className="tabular">{g.serial}</span>
+            <StatusBadge status={g.status} /> {g.model.maker} · {gameKindLabels[g.model.kind]} · serial{' '}
+            <span className="tabular">{g.serial}</span>
             {g.retiredAt && <strong className="text-down">Retired {formatDate(g.retiredAt, locale)}</strong>}
           </span>
         }
@@ -47,7 +48,8 @@ export function GamePage() {
                 className="btn-danger"
                 disabled={retire.isPending}
                 onClick={() => {
-                  if (window.confirm(`Retire ${g.model.title} (${g.serial})? It leaves its venue and the active lists; its history stays.`)) retire.mutate();
+                  if (window.confirm(`Retire ${g.model.title} (${g.serial})? It leaves its venue and the active lists; its history stays.`))
+                    retire.mutate();
                 }}
               >
                 <Archive aria-hidden className="size-4" /> Retire
@@ -63,7 +65,15 @@ export function GamePage() {
           </h2>
           <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-2">
             <dt className="font-semibold">Venue</dt>
-            <dd>{g.venueId ? <Link className="link" to={paths.venue(g.venueId)}>{g.venueName}</Link> : 'Not placed'}</dd>
+            <dd>
+              {g.venueId ? (
+                <Link className="link" to={paths.venue(g.venueId)}>
+                  {g.venueName}
+                </Link>
+              ) : (
+                'Not placed'
+              )}
+            </dd>
             <dt className="font-semibold">Installed</dt>
             <dd>{formatDate(g.installedOn, locale)}</dd>
             <dt className="font-semibold">Price per play</dt>

@@ -26,7 +26,12 @@ const columns: Column<Game, Sort>[] = [
   { header: 'Maker', cell: (g) => g.model.maker, csv: (g) => g.model.maker, className: 'hidden lg:table-cell' },
   { header: 'Kind', cell: (g) => gameKindLabels[g.model.kind], csv: (g) => g.model.kind, className: 'hidden md:table-cell' },
   { header: 'Serial', sort: 'serial', cell: (g) => <span className="tabular">{g.serial}</span>, csv: (g) => g.serial },
-  { header: 'Venue', sort: 'venue', cell: (g) => g.venueName ?? <span className="text-ink-muted">Not placed</span>, csv: (g) => g.venueName },
+  {
+    header: 'Venue',
+    sort: 'venue',
+    cell: (g) => g.venueName ?? <span className="text-ink-muted">Not placed</span>,
+    csv: (g) => g.venueName,
+  },
   { header: 'Status', sort: 'status', cell: (g) => <StatusBadge status={g.status} />, csv: (g) => gameStatusLabels[g.status] },
 ];
 

@@ -81,8 +81,8 @@ function VenueContactHome({ company }: { company: string }) {
       <PageHeader title="Your venue view" subtitle={`Your games are looked after by ${company}.`} />
       <section className="card max-w-2xl">
         <p>
-          You are signed in as a venue contact. To report a game that is not working, scan the game tag (the QR sticker)
-          on its cabinet, or call {company}.
+          You are signed in as a venue contact. To report a game that is not working, scan the game tag (the QR sticker) on its cabinet, or
+          call {company}.
         </p>
       </section>
     </>

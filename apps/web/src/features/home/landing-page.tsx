@@ -4,11 +4,27 @@ import { BellRing, CalendarCheck, ChartLine, Coins, MapPinned, Wrench } from 'lu
 import { paths } from '../../app/paths.ts';
 
 const points = [
-  { icon: BellRing, title: 'Dead game? Reported in seconds', text: 'A game tag on every cabinet lets bar staff report a problem from their phone, no account needed.' },
-  { icon: MapPinned, title: 'Dispatch on a map', text: 'See every down game and send the nearest technician who knows that kind of machine.' },
-  { icon: Wrench, title: 'Route days and bench jobs', text: 'Technicians get their stops in driving order, with parts lists, readings and safety cautions.' },
+  {
+    icon: BellRing,
+    title: 'Dead game? Reported in seconds',
+    text: 'A game tag on every cabinet lets bar staff report a problem from their phone, no account needed.',
+  },
+  {
+    icon: MapPinned,
+    title: 'Dispatch on a map',
+    text: 'See every down game and send the nearest technician who knows that kind of machine.',
+  },
+  {
+    icon: Wrench,
+    title: 'Route days and bench jobs',
+    text: 'Technicians get their stops in driving order, with parts lists, readings and safety cautions.',
+  },
   { icon: CalendarCheck, title: 'Care plans', text: 'Recaps, reflows and cleanings come due by calendar, by plays or by hours powered.' },
-  { icon: Coins, title: 'Collections that add up', text: 'Meter readings, cash counts and venue splits computed to the cent, with statements.' },
+  {
+    icon: Coins,
+    title: 'Collections that add up',
+    text: 'Meter readings, cash counts and venue splits computed to the cent, with statements.',
+  },
   { icon: ChartLine, title: 'Know what each game earns', text: 'Uptime, earnings and keep cost per game, venue and model.' },
 ];
 
@@ -21,7 +37,10 @@ export function LandingPage() {
             <span aria-hidden className="inline-block size-6 rounded-full border-[5px] border-brass-bright bg-ink" />
             Bumperline
           </span>
-          <Link to={paths.signIn} className="inline-flex min-h-11 items-center rounded-md border border-white/50 px-4 font-bold hover:bg-white/10">
+          <Link
+            to={paths.signIn}
+            className="inline-flex min-h-11 items-center rounded-md border border-white/50 px-4 font-bold hover:bg-white/10"
+          >
             Sign in
           </Link>
         </div>
@@ -32,10 +51,16 @@ export function LandingPage() {
             preventive care, collections and the numbers that tell you which games to fix, move or retire.
           </p>
           <div className="mt-6 flex flex-wrap gap-3">
-            <Link to={paths.signUp} className="inline-flex min-h-11 items-center rounded-md bg-brass-bright px-5 font-extrabold text-ink hover:bg-brass-light">
+            <Link
+              to={paths.signUp}
+              className="inline-flex min-h-11 items-center rounded-md bg-brass-bright px-5 font-extrabold text-ink hover:bg-brass-light"
+            >
               Start a free trial
             </Link>
-            <Link to={paths.signIn} className="inline-flex min-h-11 items-center rounded-md border border-white/50 px-5 font-bold hover:bg-white/10">
+            <Link
+              to={paths.signIn}
+              className="inline-flex min-h-11 items-center rounded-md border border-white/50 px-5 font-bold hover:bg-white/10"
+            >
               I already have an account
             </Link>
           </div>

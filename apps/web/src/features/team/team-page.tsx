@@ -47,10 +47,20 @@ export function TeamPage() {
             <table className="w-full text-left">
               <thead className="bg-paper-dim text-sm text-ink-soft">
                 <tr>
-                  <th scope="col" className="px-4 py-2">Name</th>
-                  <th scope="col" className="hidden px-4 py-2 md:table-cell">E-mail</th>
-                  <th scope="col" className="px-4 py-2">Role</th>
-                  {canManage && <th scope="col" className="px-4 py-2"><span className="sr-only">Actions</span></th>}
+                  <th scope="col" className="px-4 py-2">
+                    Name
+                  </th>
+                  <th scope="col" className="hidden px-4 py-2 md:table-cell">
+                    E-mail
+                  </th>
+                  <th scope="col" className="px-4 py-2">
+                    Role
+                  </th>
+                  {canManage && (
+                    <th scope="col" className="px-4 py-2">
+                      <span className="sr-only">Actions</span>
+                    </th>
+                  )}
                 </tr>
               </thead>
               <tbody>
@@ -83,7 +93,8 @@ export function TeamPage() {
                             type="button"
                             className="btn-danger"
                             onClick={() => {
-                              if (window.confirm(`Remove ${m.name} from this company? They lose access at once.`)) remove.mutate(m.userId, { onError });
+                              if (window.confirm(`Remove ${m.name} from this company? They lose access at once.`))
+                                remove.mutate(m.userId, { onError });
                             }}
                           >
                             Remove
@@ -155,8 +166,16 @@ function InviteForm() {
       <h2 id="invite-title" className="text-lg font-bold">
         Invite someone
       </h2>
-      {sent && <p role="status" className="font-semibold text-running">Invitation e-mailed to {sent}.</p>}
-      {formError && <p role="alert" className="font-semibold text-down">{formError}</p>}
+      {sent && (
+        <p role="status" className="font-semibold text-running">
+          Invitation e-mailed to {sent}.
+        </p>
+      )}
+      {formError && (
+        <p role="alert" className="font-semibold text-down">
+          {formError}
+        </p>
+      )}
       <Field label="E-mail" error={fieldMessage(form.formState.errors.email?.message)}>
         {(a) => <input {...a} type="email" className={inputClass} {...form.register('email')} />}
       </Field>

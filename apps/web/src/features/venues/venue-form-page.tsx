@@ -1,4 +1,4 @@
-import { useForm } from 'react-hook-form';
+import { useForm, useWatch } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useNavigate, useParams, Link } from 'react-router-dom';
 import { useState } from 'react';
@@ -25,7 +25,19 @@ const days = [
   ['7', 'Sunday'],
 ] as const;
 
-const FIELDS = ['name', 'addressLine', 'city', 'postcode', 'latitude', 'longitude', 'openingHours', 'contactName', 'contactPhone', 'contactEmail', 'notes'] as const;
+const FIELDS = [
+  'name',
+  'addressLine',
+  'city',
+  'postcode',
+  'latitude',
+  'longitude',
+  'openingHours',
+  'contactName',
+  'contactPhone',
+  'contactEmail',
+  'notes',
+] as const;
 
 export function EditVenuePage() {
   const { id = '' } = useParams();
@@ -54,7 +66,19 @@ function toForm(v?: Venue): FormIn {
         contactEmail: v.contactEmail,
         notes: v.notes,
       }
-    : { name: '', addressLine: '', city: '', postcode: '', latitude: undefined as unknown as number, longitude: undefined as unknown as number, openingHours: {}, contactName: '', contactPhone: '', contactEmail: '', notes: '' };
+    : {
+        name: '',
+        addressLine: '',
+        city: '',
+        postcode: '',
+        latitude: undefined as unknown as number,
+        longitude: undefined as unknown as number,
+        openingHours: {},
+        contactName: '',
+        contactPhone: '',
+        contactEmail: '',
+        notes: '',
+      };
 }
 
 function VenueForm({ venue }: { venue?: Venue }) {
@@ -64,9 +88,9 @@ function VenueForm({ venue }: { venue?: Venue }) {
   const [conflict, setConflict] = useState<Venue | null>(null);
   const [version, setVersion] = useState(venue?.version ?? 1);
   const form = useForm<FormIn, unknown, FormOut>({ resolver: zodResolver(venueInput), defaultValues: toForm(venue) });
-  const { register, handleSubmit, formState, setError, watch, setValue, reset } = form;
+  const { register, handleSubmit, formState, setError, setValue, reset, control } = form;
   const errors = formState.errors;
-  const hours = watch('openingHours') ?? {};
+  const hours = useWatch({ control, name: 'openingHours' }) ?? {};
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -140,7 +164,11 @@ function VenueForm({ venue }: { venue?: Venue }) {
                     className="size-5"
                     checked={!!win}
                     onChange={(e) =>
-                      setValue('openingHours', { ...hours, [d]: e.target.checked ? [{ open: '12:00', close: '23:00' }] : undefined }, { shouldDirty: true })
+                      setValue(
+                        'openingHours',
+                        { ...hours, [d]: e.target.checked ? [{ open: '12:00', close: '23:00' }] : undefined },
+                        { shouldDirty: true },
+                      )
                     }
                   />
                   Open
@@ -152,14 +180,18 @@ function VenueForm({ venue }: { venue?: Venue }) {
                       type="time"
                       className={inputClass}
                       value={win.open}
-                      onChange={(e) => setValue('openingHours', { ...hours, [d]: [{ ...win, open: e.target.value }] }, { shouldDirty: true })}
+                      onChange={(e) =>
+                        setValue('openingHours', { ...hours, [d]: [{ ...win, open: e.target.value }] }, { shouldDirty: true })
+                      }
                     />
                     <input
                       aria-label={`${label} closes`}
                       type="time"
                       className={inputClass}
                       value={win.close}
-                      onChange={(e) => setValue('openingHours', { ...hours, [d]: [{ ...win, close: e.target.value }] }, { shouldDirty: true })}
+                      onChange={(e) =>
+                        setValue('openingHours', { ...hours, [d]: [{ ...win, close: e.target.value }] }, { shouldDirty: true })
+                      }
                     />
                   </>
                 ) : (

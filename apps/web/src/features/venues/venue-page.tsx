@@ -119,7 +119,13 @@ export function VenuePage() {
             <h2 id="venue-activity" className="mb-3 text-lg font-bold">
               Activity
             </h2>
-            {activity.isLoading ? <Loading /> : activity.data?.items.length ? <ActivityList items={activity.data.items} locale={locale} /> : <Empty title="No changes recorded yet." />}
+            {activity.isLoading ? (
+              <Loading />
+            ) : activity.data?.items.length ? (
+              <ActivityList items={activity.data.items} locale={locale} />
+            ) : (
+              <Empty title="No changes recorded yet." />
+            )}
           </section>
         )}
       </div>

@@ -31,7 +31,14 @@ export function VenuesPage() {
   const list = useListParams<Sort>('name', ['retired']);
   const { params } = list;
   const includeRetired = list.extras.retired === 'yes';
-  const query = { q: params.q || undefined, sort: params.sort, order: params.order, cursor: params.cursor, limit: 25, includeRetired: includeRetired ? ('true' as const) : undefined };
+  const query = {
+    q: params.q || undefined,
+    sort: params.sort,
+    order: params.order,
+    cursor: params.cursor,
+    limit: 25,
+    includeRetired: includeRetired ? ('true' as const) : undefined,
+  };
   const venues = useVenues(query);
   const canWrite = useCan('venues:write');
 
@@ -69,7 +76,13 @@ export function VenuesPage() {
         exportAll={() => allVenues({ q: query.q, sort: query.sort, order: query.order, includeRetired: query.includeRetired })}
         exportName="venues"
         emptyTitle={params.q ? 'No venue matches that search.' : 'No venues yet.'}
-        emptyHint={canWrite && !params.q ? <Link className="link" to={paths.newVenue}>Add the first venue</Link> : undefined}
+        emptyHint={
+          canWrite && !params.q ? (
+            <Link className="link" to={paths.newVenue}>
+              Add the first venue
+            </Link>
+          ) : undefined
+        }
         filters={
           <label className="flex min-h-11 items-center gap-2 font-semibold">
             <input
