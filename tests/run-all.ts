@@ -31,6 +31,11 @@ function ensureChromium(): void {
   execFileSync('apt-get', ['install', '-y', '-qq', 'chromium', 'fonts-liberation'], { stdio: 'inherit', env });
 }
 
+if (!only || only === 'static') {
+  run('Type check', bin('tsc'), ['--noEmit', '-p', 'tsconfig.json']);
+  run('Lint', bin('eslint'), ['--config', '.eslint.config.js', '.', '--max-warnings', '0']);
+  run('Formatting', bin('prettier'), ['--check', '.', '--log-level', 'warn']);
+}
 ensureServerInstalled();
 if (!only || only === 'vitest') run('Unit and API integration tests (Vitest)', bin('vitest'), ['run']);
 if (!only || only === 'e2e') {

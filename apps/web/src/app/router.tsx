@@ -11,15 +11,20 @@ import { LinkSignInPage } from '../features/auth/link-sign-in-page.tsx';
 import { InvitationPage } from '../features/auth/invitation-page.tsx';
 import { HomePage } from '../features/home/home-page.tsx';
 import { LandingPage } from '../features/home/landing-page.tsx';
-import { VenuesPage } from '../features/venues/venues-page.tsx';
-import { VenuePage } from '../features/venues/venue-page.tsx';
-import { EditVenuePage, NewVenuePage } from '../features/venues/venue-form-page.tsx';
-import { GamesPage } from '../features/games/games-page.tsx';
-import { GamePage } from '../features/games/game-page.tsx';
-import { EditGamePage, NewGamePage } from '../features/games/game-form-page.tsx';
-import { TeamPage } from '../features/team/team-page.tsx';
-import { ActivityPage } from '../features/team/activity-page.tsx';
 import { NotFoundPage } from './not-found-page.tsx';
+import { lazyPage } from './lazy-page.tsx';
+
+// Staff screens load on first visit; the sign-in and landing pages stay in the first bundle.
+const VenuesPage = lazyPage(() => import('../features/venues/venues-page.tsx').then((m) => m.VenuesPage));
+const VenuePage = lazyPage(() => import('../features/venues/venue-page.tsx').then((m) => m.VenuePage));
+const EditVenuePage = lazyPage(() => import('../features/venues/venue-form-page.tsx').then((m) => m.EditVenuePage));
+const NewVenuePage = lazyPage(() => import('../features/venues/venue-form-page.tsx').then((m) => m.NewVenuePage));
+const GamesPage = lazyPage(() => import('../features/games/games-page.tsx').then((m) => m.GamesPage));
+const GamePage = lazyPage(() => import('../features/games/game-page.tsx').then((m) => m.GamePage));
+const EditGamePage = lazyPage(() => import('../features/games/game-form-page.tsx').then((m) => m.EditGamePage));
+const NewGamePage = lazyPage(() => import('../features/games/game-form-page.tsx').then((m) => m.NewGamePage));
+const TeamPage = lazyPage(() => import('../features/team/team-page.tsx').then((m) => m.TeamPage));
+const ActivityPage = lazyPage(() => import('../features/team/activity-page.tsx').then((m) => m.ActivityPage));
 
 /** "/" is the landing page for visitors and the Today screen once signed in. */
 function Root() {

@@ -29,6 +29,7 @@ export interface DataTableProps<T, S extends string> {
   sort: S;
   order: 'asc' | 'desc';
   onSort: (s: S) => void;
+  onSortSet: (s: S, order: 'asc' | 'desc') => void;
   hasPrev: boolean;
   hasNext: boolean;
   onPrev: () => void;
@@ -91,6 +92,28 @@ export function DataTable<T, S extends string>(p: DataTableProps<T, S>) {
           />
         </label>
         {p.filters}
+        <label className="flex items-center gap-2 md:hidden">
+          <span className="font-semibold">Sort</span>
+          <select
+            className={`${inputClass} w-auto`}
+            value={`${p.sort}:${p.order}`}
+            onChange={(e) => {
+              const [s, o] = e.target.value.split(':') as [S, 'asc' | 'desc'];
+              p.onSortSet(s, o);
+            }}
+          >
+            {p.columns
+              .filter((c) => c.sort)
+              .flatMap((c) => [
+                <option key={`${c.sort}:asc`} value={`${c.sort}:asc`}>
+                  {c.header}, ascending
+                </option>,
+                <option key={`${c.sort}:desc`} value={`${c.sort}:desc`}>
+                  {c.header}, descending
+                </option>,
+              ])}
+          </select>
+        </label>
         <button type="button" className="btn-secondary" onClick={exportCsv} disabled={exporting}>
           <Download aria-hidden className="size-4" /> {exporting ? 'Exporting…' : 'Export CSV'}
         </button>
@@ -102,55 +125,73 @@ export function DataTable<T, S extends string>(p: DataTableProps<T, S>) {
       ) : !p.rows?.length ? (
         <Empty title={p.emptyTitle}>{p.emptyHint}</Empty>
       ) : (
-        <div className="overflow-x-auto">
-          <table className="w-full text-left">
-            <caption className="sr-only">{p.caption}</caption>
-            <thead className="bg-paper-dim text-sm text-ink-soft">
-              <tr>
-                {p.columns.map((c) => (
-                  <th
-                    key={c.header}
-                    scope="col"
-                    className={`px-3 py-2 font-bold ${c.className ?? ''}`}
-                    aria-sort={c.sort && c.sort === p.sort ? (p.order === 'asc' ? 'ascending' : 'descending') : undefined}
-                  >
-                    {c.sort ? (
-                      <button
-                        type="button"
-                        className="inline-flex items-center gap-1 font-bold hover:text-ink"
-                        onClick={() => p.onSort(c.sort!)}
-                      >
-                        {c.header}
-                        {c.sort === p.sort ? (
-                          p.order === 'asc' ? (
-                            <ArrowUp aria-hidden className="size-4" />
-                          ) : (
-                            <ArrowDown aria-hidden className="size-4" />
-                          )
-                        ) : (
-                          <ArrowUpDown aria-hidden className="size-4 opacity-50" />
-                        )}
-                      </button>
-                    ) : (
-                      c.header
-                    )}
-                  </th>
-                ))}
-              </tr>
-            </thead>
-            <tbody>
-              {p.rows.map((row) => (
-                <tr key={p.rowKey(row)} className="border-t border-paper-line hover:bg-paper-dim/60">
+        <>
+          {/* On a phone each row is a card: the first column as its title, the rest as labelled values. */}
+          <ul className="divide-y divide-paper-line md:hidden" aria-label={p.caption}>
+            {p.rows.map((row) => (
+              <li key={p.rowKey(row)} className="grid gap-1 px-3 py-3">
+                <div className="text-lg">{p.columns[0]!.cell(row)}</div>
+                <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-1 text-sm">
+                  {p.columns.slice(1).map((c) => (
+                    <div key={c.header} className="contents">
+                      <dt className="font-semibold text-ink-soft">{c.header}</dt>
+                      <dd>{c.cell(row)}</dd>
+                    </div>
+                  ))}
+                </dl>
+              </li>
+            ))}
+          </ul>
+          <div className="hidden overflow-x-auto md:block">
+            <table className="w-full text-left">
+              <caption className="sr-only">{p.caption}</caption>
+              <thead className="bg-paper-dim text-sm text-ink-soft">
+                <tr>
                   {p.columns.map((c) => (
-                    <td key={c.header} className={`px-3 py-2.5 align-middle ${c.className ?? ''}`}>
-                      {c.cell(row)}
-                    </td>
+                    <th
+                      key={c.header}
+                      scope="col"
+                      className={`px-3 py-2 font-bold ${c.className ?? ''}`}
+                      aria-sort={c.sort && c.sort === p.sort ? (p.order === 'asc' ? 'ascending' : 'descending') : undefined}
+                    >
+                      {c.sort ? (
+                        <button
+                          type="button"
+                          className="inline-flex items-center gap-1 font-bold hover:text-ink"
+                          onClick={() => p.onSort(c.sort!)}
+                        >
+                          {c.header}
+                          {c.sort === p.sort ? (
+                            p.order === 'asc' ? (
+                              <ArrowUp aria-hidden className="size-4" />
+                            ) : (
+                              <ArrowDown aria-hidden className="size-4" />
+                            )
+                          ) : (
+                            <ArrowUpDown aria-hidden className="size-4 opacity-50" />
+                          )}
+                        </button>
+                      ) : (
+                        c.header
+                      )}
+                    </th>
                   ))}
                 </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+              </thead>
+              <tbody>
+                {p.rows.map((row) => (
+                  <tr key={p.rowKey(row)} className="border-t border-paper-line hover:bg-paper-dim/60">
+                    {p.columns.map((c) => (
+                      <td key={c.header} className={`px-3 py-2.5 align-middle ${c.className ?? ''}`}>
+                        {c.cell(row)}
+                      </td>
+                    ))}
+                  </tr>
+                ))}
+              </tbody>
+            </table>
+          </div>
+        </>
       )}
       <nav aria-label="Pages" className="flex items-center justify-end gap-2 border-t border-paper-line p-3">
         <button type="button" className="btn-secondary" onClick={p.onPrev} disabled={!p.hasPrev}>

@@ -51,6 +51,7 @@ export function useListParams<S extends string>(defaultSort: S, extraKeys: strin
     extras,
     setSearch: (q: string) => update({ q }),
     setFilter: (key: string, value: string) => update({ [key]: value }),
+    setSort: (sort: S, order: 'asc' | 'desc') => update({ sort, order }),
     toggleSort: (sort: S) => update({ sort, order: params.sort === sort && params.order === 'asc' ? 'desc' : 'asc' }),
     nextPage: (cursor: string) => update({ cursor, trail: [...params.trail, params.cursor ?? ''].join(',') }, false),
     prevPage: () => {

@@ -77,6 +77,7 @@ export function GamesPage() {
         sort={params.sort}
         order={params.order}
         onSort={list.toggleSort}
+        onSortSet={list.setSort}
         hasPrev={!!params.cursor}
         hasNext={!!games.data?.nextCursor}
         onPrev={list.prevPage}

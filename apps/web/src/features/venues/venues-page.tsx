@@ -69,6 +69,7 @@ export function VenuesPage() {
         sort={params.sort}
         order={params.order}
         onSort={list.toggleSort}
+        onSortSet={list.setSort}
         hasPrev={!!params.cursor}
         hasNext={!!venues.data?.nextCursor}
         onPrev={list.prevPage}
