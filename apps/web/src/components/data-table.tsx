@@ -92,9 +92,12 @@ export function DataTable<T, S extends string>(p: DataTableProps<T, S>) {
           />
         </label>
         {p.filters}
-        <label className="flex items-center gap-2 md:hidden">
-          <span className="font-semibold">Sort</span>
+        <div className="flex items-center gap-2 md:hidden">
+          <span className="font-semibold" id="sort-label">
+            Sort
+          </span>
           <select
+            aria-labelledby="sort-label"
             className={`${inputClass} w-auto`}
             value={`${p.sort}:${p.order}`}
             onChange={(e) => {
@@ -113,7 +116,7 @@ export function DataTable<T, S extends string>(p: DataTableProps<T, S>) {
                 </option>,
               ])}
           </select>
-        </label>
+        </div>
         <button type="button" className="btn-secondary" onClick={exportCsv} disabled={exporting}>
           <Download aria-hidden className="size-4" /> {exporting ? 'Exporting…' : 'Export CSV'}
         </button>
