@@ -14,7 +14,16 @@ export default defineConfig({
   server: {
     host: '127.0.0.1',
     port: 5173,
-    proxy: { '/api': apiTarget, '/auth': apiTarget, '/dev': apiTarget },
+    proxy: {
+      '/api': apiTarget,
+      '/auth': apiTarget,
+      '/dev': apiTarget,
+      '/webhooks': apiTarget,
+      // The public game-tag pages are served by the API (they work without JavaScript).
+      '^/t/': apiTarget,
+      '/t-assets': apiTarget,
+      '^/status/': apiTarget,
+    },
   },
   test: {
     projects: [

@@ -66,6 +66,8 @@ describe('sign-up and sign-in', () => {
 describe('roles', () => {
   it('follow the one permission table on every guarded route', async () => {
     // Each permission has a route that needs it; every role must get 2xx exactly when the table allows.
+    const ownerAgent = await signedInAgent(t, people.owner);
+    const call = await ownerAgent.post('/api/calls').set(JSON_HEADERS).send({ gameId: company.gameIds[1], problem: 'other' }).expect(201);
     const probes: Record<Permission, (a: ReturnType<typeof request.agent>) => request.Test> = {
       'venues:read': (a) => a.get('/api/venues'),
       'venues:write': (a) =>
@@ -85,6 +87,12 @@ describe('roles', () => {
           .send({ email: `inv${Math.random()}@x.test`, role: 'technician' }),
       'company:manage': (a) => a.patch('/api/company').set(JSON_HEADERS).send({ locale: 'en-US' }),
       'audit:read': (a) => a.get('/api/activity'),
+      'calls:read': (a) => a.get('/api/calls'),
+      'calls:open': (a) => a.post('/api/calls').set(JSON_HEADERS).send({ gameId: company.gameIds[1], problem: 'no_sound' }),
+      'calls:dispatch': (a) => a.get('/api/technicians'),
+      'calls:work': (a) => a.post(`/api/calls/${call.body.id}/notes`).set(JSON_HEADERS).send({ note: 'probe' }),
+      'settings:manage': (a) => a.patch('/api/settings').set(JSON_HEADERS).send({ warnBeforeMinutes: 30 }),
+      'venue-view': (a) => a.get('/api/venue-view'),
     };
     for (const role of roles) {
       const agent = await signedInAgent(t, people[role]);

@@ -1,3 +1,6 @@
+import os from 'node:os';
+import path from 'node:path';
+import { folderPhotoStore } from '@bumperline/api/services/photo-store';
 // The health check tells the truth about the database, and the API recovers when it comes back.
 import request from 'supertest';
 import pino from 'pino';
@@ -21,6 +24,8 @@ function appOn(url: string) {
     mailer: createMailer({ fakePort: 1, from: 'x@y.test' }),
     logger: pino({ level: 'silent' }),
     authSecret: 'test-secret-that-is-at-least-32-characters-long',
+    smsAuthToken: 'test-twilio-auth-token',
+    photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
     appOrigin: 'http://127.0.0.1:3999',
   });
 }

@@ -1,3 +1,6 @@
+import os from 'node:os';
+import path from 'node:path';
+import { folderPhotoStore } from '@bumperline/api/services/photo-store';
 // Passwords and session cookies never reach the logs, whatever happens to the request.
 import { Writable } from 'node:stream';
 import pino from 'pino';
@@ -29,6 +32,8 @@ describe('logs', () => {
       mailer: createMailer({ fakePort: 1, from: 'x@y.test' }),
       logger: pino({ level: 'trace' }, sink),
       authSecret: 'test-secret-that-is-at-least-32-characters-long',
+      smsAuthToken: 'test-twilio-auth-token',
+      photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
       appOrigin: 'http://127.0.0.1:3999',
     });
     const company = await createCompany(db.owner, 'Logcheck Games', 1);

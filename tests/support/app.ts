@@ -1,3 +1,8 @@
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
+import os from 'node:os';
+import path from 'node:path';
+import { folderPhotoStore } from '@bumperline/api/services/photo-store';
 // Builds the real API (createApp) on a fresh database, with the mail fake, for supertest.
 import pino from 'pino';
 import request from 'supertest';
@@ -6,6 +11,8 @@ import { createApp } from '@bumperline/api/app';
 import { createMailer } from '@bumperline/api/services/mailer';
 import { SignInLimiter } from '@bumperline/api/auth/sign-in-limiter';
 import { startMailFake, type MailFake } from '@bumperline/fakes/mail/mail-fake';
+import { startSmsFake, type SmsFake } from '@bumperline/fakes/sms/sms-fake';
+import { createSmsSender, type SmsSender } from '@bumperline/api/services/sms';
 import { freshDatabase, type TestDatabase } from './database.ts';
 import { TEST_PASSWORD } from './factories.ts';
 
@@ -13,28 +20,80 @@ export interface TestApp {
   app: Express;
   db: TestDatabase;
   mail: MailFake;
+  /** With `{ sms: true }`: the SMS fake, whose signed webhooks reach this app. */
+  sms?: TestSms;
   close(): Promise<void>;
 }
 
-export const ORIGIN = 'http://127.0.0.1:3999';
+export interface TestSms {
+  fake: SmsFake;
+  /** The app's SMS sender (the official SDK), pointed at the fake as main.ts does. */
+  sender: SmsSender;
+  /** Our number. */
+  from: string;
+}
 
-export async function buildTestApp(opts: { signInLimit?: number } = {}): Promise<TestApp> {
+export const ORIGIN = 'http://127.0.0.1:3999';
+export const SMS_AUTH_TOKEN = 'test-twilio-auth-token';
+export const SMS_ACCOUNT_SID = 'ACtesttesttesttesttesttesttesttest';
+export const SMS_FROM = '+13125550199';
+
+/**
+ * The SMS fake signs its webhooks for the public URL (ORIGIN), as the provider would; they reach the app
+ * through a loopback listener, as through a load balancer that keeps the path.
+ */
+async function startTestSms(): Promise<{ sms: TestSms; server: http.Server }> {
+  const server = http.createServer();
+  await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+  const statusCallbackUrl = `${ORIGIN}/webhooks/sms/status`;
+  const fake = await startSmsFake({
+    accountSid: SMS_ACCOUNT_SID,
+    authToken: SMS_AUTH_TOKEN,
+    number: SMS_FROM,
+    webhookUrl: `${ORIGIN}/webhooks/sms/inbound`,
+    statusCallbackUrl,
+    deliverTo: `http://127.0.0.1:${(server.address() as AddressInfo).port}`,
+  });
+  const sender = createSmsSender({
+    accountSid: SMS_ACCOUNT_SID,
+    authToken: SMS_AUTH_TOKEN,
+    from: SMS_FROM,
+    fakeUrl: fake.url,
+    statusCallbackUrl,
+  });
+  return { sms: { fake, sender, from: SMS_FROM }, server };
+}
+
+export async function buildTestApp(opts: { signInLimit?: number; sms?: boolean } = {}): Promise<TestApp> {
   const db = await freshDatabase();
   const mail = await startMailFake();
+  const sms = opts.sms ? await startTestSms() : undefined;
   const app = createApp({
     db: db.app,
     mailer: createMailer({ fakePort: mail.port, from: 'Bumperline test <test@bumperline.example>' }),
     logger: pino({ level: 'silent' }),
     authSecret: 'test-secret-that-is-at-least-32-characters-long',
+    smsAuthToken: SMS_AUTH_TOKEN,
+    ...(sms ? { smsFake: sms.sms.fake } : {}),
+    photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
     appOrigin: ORIGIN,
     mailFake: mail,
     signInLimiter: new SignInLimiter(opts.signInLimit ?? 50),
   });
+  sms?.server.on('request', app);
   return {
     app,
     db,
     mail,
+    ...(sms ? { sms: sms.sms } : {}),
     async close() {
+      if (sms) {
+        await sms.sms.fake.stop();
+        await new Promise((resolve) => {
+          sms.server.close(resolve);
+          sms.server.closeAllConnections();
+        });
+      }
       await mail.stop();
       await db.drop();
     },

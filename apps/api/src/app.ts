@@ -24,6 +24,15 @@ import { gamesRouter, modelsRouter } from './routes/games.ts';
 import { healthRouter } from './routes/health.ts';
 import { invitationsRouter, teamRouter } from './routes/team.ts';
 import { venuesRouter } from './routes/venues.ts';
+import { callsRouter, techniciansRouter } from './routes/calls.ts';
+import { settingsRouter } from './routes/settings.ts';
+import { venueViewRouter } from './routes/venue-view.ts';
+import type { PhotoStore } from './services/photo-store.ts';
+import { smsWebhookRouter } from './routes/sms-webhook.ts';
+import { devPhoneRouter } from './routes/dev-phone.ts';
+import { publicTagsRouter } from './routes/public-tags.ts';
+import { tagSheetRouter } from './routes/tag-sheet.ts';
+import type { SmsFake } from '@bumperline/fakes/sms/sms-fake';
 
 export interface AppDeps {
   db: Db;
@@ -36,6 +45,11 @@ export interface AppDeps {
   /** The built web app (vite build) to serve, in production. */
   webDist?: string;
   signInLimiter?: SignInLimiter;
+  photos: PhotoStore;
+  /** Twilio auth token: validates the X-Twilio-Signature of inbound webhooks. */
+  smsAuthToken: string;
+  /** Present while the SMS fake stands in for Twilio: mounts /dev/phone. */
+  smsFake?: SmsFake;
 }
 
 export function createApp(deps: AppDeps): Express {
@@ -80,6 +94,11 @@ export function createApp(deps: AppDeps): Express {
   });
   app.use('/auth', ExpressAuth(authConfig));
 
+  // Provider webhooks (form-encoded, signed) come before our JSON parser and CSRF guard.
+  app.use('/webhooks/sms', smsWebhookRouter({ db: deps.db, authToken: deps.smsAuthToken, publicOrigin: deps.appOrigin }));
+  // Public game-tag pages: no sign-in, plain HTML forms that work without JavaScript.
+  app.use(publicTagsRouter({ db: deps.db, photos: deps.photos, appOrigin: deps.appOrigin }));
+
   app.use(express.json({ limit: '100kb' }));
   app.use(loadActor(deps.db, authConfig));
 
@@ -95,10 +114,16 @@ export function createApp(deps: AppDeps): Express {
   api.use('/venues', venuesRouter(scoped));
   api.use('/games', gamesRouter(scoped));
   api.use('/models', modelsRouter(scoped));
+  api.use('/calls', callsRouter({ scoped, appOrigin: deps.appOrigin, photos: deps.photos }));
+  api.use('/technicians', techniciansRouter(scoped));
+  api.use('/settings', settingsRouter(scoped));
+  api.use('/venue-view', venueViewRouter({ scoped, appOrigin: deps.appOrigin }));
+  api.use(tagSheetRouter({ scoped, appOrigin: deps.appOrigin }));
   api.use(notFoundHandler);
   app.use('/api', api);
 
   if (deps.mailFake) app.use('/dev', devRouter(deps.mailFake));
+  if (deps.smsFake) app.use('/dev', devPhoneRouter(deps.smsFake));
 
   if (deps.webDist && existsSync(path.join(deps.webDist, 'index.html'))) {
     const index = path.join(deps.webDist, 'index.html');

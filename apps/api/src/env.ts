@@ -20,6 +20,12 @@ const schema = z.object({
   SMTP_URL: z.string().optional(),
   MAIL_FROM: z.string().default('Bumperline <no-reply@bumperline.example>'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  /** Photos are stored here, outside the web root. */
+  UPLOADS_DIR: z.string().optional(),
+  TWILIO_ACCOUNT_SID: z.string().optional(),
+  TWILIO_AUTH_TOKEN: z.string().optional(),
+  /** The number (E.164) SMS is sent from. */
+  TWILIO_FROM: z.string().default('+13125550199'),
   SEED_DEMO: z.enum(['true', 'false']).default('true'),
 });
 

@@ -75,4 +75,6 @@ export interface Game {
   retiredAt: string | null;
   model: GameModel;
   venueName: string | null;
+  /** Only on a single game's page: the secret in its game tag's address (/t/<token>). */
+  tagToken?: string;
 }

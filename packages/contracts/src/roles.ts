@@ -20,6 +20,12 @@ export const permissions = {
   'team:manage': ['owner'],
   'company:manage': ['owner'],
   'audit:read': ['owner'],
+  'calls:read': ['owner', 'dispatcher', 'technician'],
+  'calls:open': ['owner', 'dispatcher', 'technician'],
+  'calls:dispatch': ['owner', 'dispatcher'],
+  'calls:work': ['owner', 'dispatcher', 'technician'],
+  'settings:manage': ['owner'],
+  'venue-view': ['venue_contact'],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Permission = keyof typeof permissions;

@@ -4,6 +4,7 @@ import {
   countGamesByStatus,
   getGame,
   getModel,
+  getTagToken,
   insertGame,
   insertModel,
   listGames,
@@ -49,9 +50,10 @@ export function gamesRouter(scoped: ReturnType<typeof makeScoped>): Router {
   r.get(
     '/:id',
     scoped('games:read', async ({ tx, req }) => {
-      const game = await getGame(tx, idParam(req));
+      const id = idParam(req);
+      const game = await getGame(tx, id);
       if (!game) throw new NotFoundError('game');
-      return game;
+      return { ...game, tagToken: await getTagToken(tx, id) };
     }),
   );
 

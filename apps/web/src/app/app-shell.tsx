@@ -1,7 +1,7 @@
 // The signed-in frame: our mark, the sections this role may open, the company switcher, sign out.
 import { NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
-import { Building2, Gauge, History, LogOut, MapPinned, Users, Joystick } from 'lucide-react';
+import { Building2, Gauge, History, LogOut, MapPinned, Users, Joystick, Siren, Settings } from 'lucide-react';
 import { can, roleLabels, type Permission } from '@bumperline/contracts/roles';
 import { useMe } from '../api/me.ts';
 import { useSwitchCompany } from '../api/switch-company.ts';
@@ -10,10 +10,12 @@ import { paths } from './paths.ts';
 
 const sections: { to: string; label: string; icon: typeof Gauge; needs?: Permission }[] = [
   { to: paths.home, label: 'Today', icon: Gauge },
+  { to: paths.calls, label: 'Calls', icon: Siren, needs: 'calls:read' },
   { to: paths.venues, label: 'Venues', icon: MapPinned, needs: 'venues:read' },
   { to: paths.games, label: 'Games', icon: Joystick, needs: 'games:read' },
   { to: paths.team, label: 'Team', icon: Users, needs: 'team:read' },
   { to: paths.activity, label: 'Activity', icon: History, needs: 'audit:read' },
+  { to: paths.settings, label: 'Settings', icon: Settings, needs: 'settings:manage' },
 ];
 
 export function AppShell() {
@@ -33,7 +35,7 @@ export function AppShell() {
         Skip to content
       </a>
       <header className="bg-ink text-white">
-        <div className="mx-auto flex max-w-7xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
+        <div className="mx-auto flex max-w-[96rem] flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
           <NavLink to={paths.home} className="flex items-center gap-2 text-xl font-extrabold">
             <span aria-hidden className="inline-block size-6 rounded-full border-[5px] border-brass-bright bg-ink" />
             Bumperline
@@ -77,7 +79,7 @@ export function AppShell() {
           </div>
         </div>
         <nav aria-label="Sections" className="border-t border-white/15">
-          <ul className="mx-auto flex max-w-7xl gap-1 overflow-x-auto px-2">
+          <ul className="mx-auto flex max-w-[96rem] gap-1 overflow-x-auto px-2">
             {visible.map((s) => (
               <li key={s.to}>
                 <NavLink
@@ -95,7 +97,7 @@ export function AppShell() {
           </ul>
         </nav>
       </header>
-      <main id="main" className="mx-auto max-w-7xl px-4 py-6">
+      <main id="main" className="mx-auto max-w-[96rem] px-4 py-6">
         <Outlet />
       </main>
     </div>

@@ -20,16 +20,26 @@ export const secondCompany = {
   locale: 'en-US',
 };
 
+// Phone numbers use the 555-01xx range, which North American numbering reserves for fiction.
 export const demoPeople = [
-  { email: 'owner@lakeshore.example', name: 'Marguerite Oyelaran', role: 'owner' },
-  { email: 'dispatch@lakeshore.example', name: 'Devon Castellanos', role: 'dispatcher' },
-  { email: 'tech1@lakeshore.example', name: 'Ilse Brandvold', role: 'technician' },
-  { email: 'tech2@lakeshore.example', name: 'Kofi Ansah-Whitfield', role: 'technician' },
-  { email: 'tech3@lakeshore.example', name: 'Parveen Lutz', role: 'technician' },
-  { email: 'venue@lakeshore.example', name: 'Hollis Varga', role: 'venue_contact' },
+  { email: 'owner@lakeshore.example', name: 'Marguerite Oyelaran', role: 'owner', phone: '+13125550101' },
+  { email: 'dispatch@lakeshore.example', name: 'Devon Castellanos', role: 'dispatcher', phone: '+13125550102' },
+  { email: 'tech1@lakeshore.example', name: 'Ilse Brandvold', role: 'technician', phone: '+13125550111' },
+  { email: 'tech2@lakeshore.example', name: 'Kofi Ansah-Whitfield', role: 'technician', phone: '+13125550112' },
+  { email: 'tech3@lakeshore.example', name: 'Parveen Lutz', role: 'technician', phone: '+13125550113' },
+  { email: 'venue@lakeshore.example', name: 'Hollis Varga', role: 'venue_contact', phone: null },
 ] as const;
 
-export const secondPeople = [{ email: 'owner@prairie.example', name: 'Tamsin Okafor-Reyes', role: 'owner' }] as const;
+/** Where each technician's day starts (real neighbourhood coordinates) and what they are good at. */
+export const technicianProfiles: Record<string, { skills: string[]; lat: number; lon: number }> = {
+  'tech1@lakeshore.example': { skills: ['pinball', 'jukebox', 'power-supply', 'recap'], lat: 41.9403, lon: -87.6533 },
+  'tech2@lakeshore.example': { skills: ['video', 'pinball', 'monitor'], lat: 41.8564, lon: -87.6564 },
+  'tech3@lakeshore.example': { skills: ['darts', 'jukebox', 'video'], lat: 41.885, lon: -87.7845 },
+};
+
+export const secondPeople = [
+  { email: 'owner@prairie.example', name: 'Tamsin Okafor-Reyes', role: 'owner', phone: '+16305550121' },
+] as const;
 
 /** Real neighbourhood centres in the Chicago area (approximate, public map coordinates). */
 export const neighbourhoods: { name: string; lat: number; lon: number; city: string; zip: string }[] = [

@@ -1,15 +1,27 @@
 // Seeds the demo scenario once: running it again finds the demo company and changes nothing.
 // Runs as the owner role (which may write for several companies).
 import { createHash } from 'node:crypto';
-import { eq } from 'drizzle-orm';
+import { eq, inArray } from 'drizzle-orm';
 import type { Db } from '../client.ts';
-import { gameModels, games, memberships, tenants, users, venues } from '../schema/index.ts';
+import {
+  gameModels,
+  games,
+  memberships,
+  technicianProfiles as technicianProfilesTable,
+  tenantSettings,
+  tenants,
+  users,
+  venueContacts,
+  venues,
+} from '../schema/index.ts';
+import { seedCallHistory } from './call-history.ts';
 import { hashPassword } from '../passwords.ts';
 import {
   DEMO_PASSWORD,
   demoCompany,
   demoModels,
   demoPeople,
+  technicianProfiles,
   neighbourhoods,
   openingHoursFor,
   secondCompany,
@@ -41,11 +53,17 @@ export async function seedDemo(db: Db): Promise<boolean> {
       for (const p of people) {
         const [u] = await tx
           .insert(users)
-          .values({ email: p.email, name: p.name, passwordHash })
+          .values({ email: p.email, name: p.name, passwordHash, phone: p.phone })
           .onConflictDoNothing()
           .returning({ id: users.id });
         const userId = u?.id ?? (await tx.select({ id: users.id }).from(users).where(eq(users.email, p.email)))[0]!.id;
         await tx.insert(memberships).values({ tenantId: company.id, userId, role: p.role });
+        const profile = technicianProfiles[p.email];
+        if (profile && company.id === demoCompany.id) {
+          await tx
+            .insert(technicianProfilesTable)
+            .values({ tenantId: company.id, userId, skills: profile.skills, homeLatitude: profile.lat, homeLongitude: profile.lon });
+        }
       }
     }
     // Ilse the technician also freelances for the second company: she switches between them.
@@ -77,29 +95,42 @@ export async function seedDemo(db: Db): Promise<boolean> {
         }),
       )
       .returning({ id: venues.id });
+    await tx.insert(tenantSettings).values([{ tenantId: demoCompany.id, dispatchPhone: '+13125550102' }, { tenantId: secondCompany.id }]);
+    // Hollis speaks for the first venue.
+    const [hollis] = await tx.select({ id: users.id }).from(users).where(eq(users.email, 'venue@lakeshore.example'));
+    await tx.insert(venueContacts).values({ tenantId: demoCompany.id, venueId: venueRows[0]!.id, userId: hollis!.id });
+
     const modelRows = await tx
       .insert(gameModels)
       .values(demoModels.map((m) => ({ ...m, tenantId: demoCompany.id })))
       .returning({ id: gameModels.id, kind: gameModels.kind });
     const statuses = ['running', 'running', 'running', 'running', 'running', 'running', 'running', 'attention', 'down', 'in_shop'] as const;
-    await tx.insert(games).values(
-      Array.from({ length: GAMES }, (_, i) => {
-        const model = modelRows[Math.floor(rand() * modelRows.length)]!;
-        const installed = new Date(Date.UTC(2019 + Math.floor(rand() * 6), Math.floor(rand() * 12), 1 + Math.floor(rand() * 27)));
-        const status = statuses[Math.floor(rand() * statuses.length)]!;
-        return {
-          tenantId: demoCompany.id,
-          modelId: model.id,
-          venueId: status === 'in_shop' ? null : venueRows[i % VENUES]!.id,
-          serial: `LT-${String(10000 + i * 37).padStart(6, '0')}`,
-          status,
-          installedOn: installed.toISOString().slice(0, 10),
-          pricePerPlayCents: model.kind === 'pinball' ? (rand() < 0.5 ? 100 : 150) : model.kind === 'jukebox' ? 50 : 100,
-          tagToken: demoToken(demoCompany.id, i),
-          createdAt: installed,
-        };
-      }),
-    );
+    const gameRows = await tx
+      .insert(games)
+      .values(
+        Array.from({ length: GAMES }, (_, i) => {
+          const model = modelRows[Math.floor(rand() * modelRows.length)]!;
+          const installed = new Date(Date.UTC(2019 + Math.floor(rand() * 6), Math.floor(rand() * 12), 1 + Math.floor(rand() * 27)));
+          const status = statuses[Math.floor(rand() * statuses.length)]!;
+          return {
+            tenantId: demoCompany.id,
+            modelId: model.id,
+            venueId: status === 'in_shop' ? null : venueRows[i % VENUES]!.id,
+            serial: `LT-${String(10000 + i * 37).padStart(6, '0')}`,
+            status,
+            installedOn: installed.toISOString().slice(0, 10),
+            pricePerPlayCents: model.kind === 'pinball' ? (rand() < 0.5 ? 100 : 150) : model.kind === 'jukebox' ? 50 : 100,
+            tagToken: demoToken(demoCompany.id, i),
+            createdAt: installed,
+          };
+        }),
+      )
+      .returning({ id: games.id, venueId: games.venueId, status: games.status, installedOn: games.installedOn });
+    const techIds = await tx
+      .select({ id: users.id })
+      .from(users)
+      .where(inArray(users.email, Object.keys(technicianProfiles)));
+    await seedCallHistory(tx, { tenantId: demoCompany.id, games: gameRows, technicianIds: techIds.map((t) => t.id), rand });
 
     // The second company: a few venues and games of its own.
     const [pv1, pv2, pv3] = await tx

@@ -86,6 +86,15 @@ export async function getGame(tx: Tx, id: string) {
   return g;
 }
 
+/** The game tag's token: for staff screens only, never in lists. */
+export async function getTagToken(tx: Tx, id: string) {
+  const [g] = await tx
+    .select({ tagToken: games.tagToken })
+    .from(games)
+    .where(and(eq(games.tenantId, currentTenant), eq(games.id, id)));
+  return g?.tagToken;
+}
+
 export function newTagToken(): string {
   return randomBytes(18).toString('base64url');
 }

@@ -10,6 +10,8 @@ export const users = pgTable(
     email: text('email').notNull(),
     name: text('name').notNull(),
     passwordHash: text('password_hash'),
+    /** Mobile number in E.164 (+13125550100), for SMS. */
+    phone: text('phone'),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [uniqueIndex('users_email_key').on(sql`lower(${t.email})`)],
@@ -41,6 +43,12 @@ export const emailTokens = pgTable('email_tokens', {
   expiresAt: timestamp('expires_at', { withTimezone: true }).notNull(),
   createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   usedAt: timestamp('used_at', { withTimezone: true }),
+});
+
+/** Numbers that texted STOP: nothing is sent to them until they text START (carrier rules, any company). */
+export const smsOptOuts = pgTable('sms_opt_outs', {
+  phone: text('phone').primaryKey(),
+  optedOutAt: timestamp('opted_out_at', { withTimezone: true }).notNull().defaultNow(),
 });
 
 export const platformAdmins = pgTable('platform_admins', {

@@ -5,3 +5,4 @@ export * from './tenancy.ts';
 export * from './venues.ts';
 export * from './games.ts';
 export * from './audit.ts';
+export * from './service.ts';

@@ -10,7 +10,14 @@ import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings } from '../../api/me.ts';
 import { useGame, useRetireGame } from '../../api/games.ts';
 import { useActivity } from '../../api/activity.ts';
-import { formatDate, formatMoney } from '../../lib/format.ts';
+import { formatDate, formatDateTime, formatMoney } from '../../lib/format.ts';
+import { useCalls, useOpenCall } from '../../api/calls.ts';
+import { CallStateBadge } from '../../components/call-state-badge.tsx';
+import { callRef, problemKinds, problemLabels, type ProblemKind } from '@bumperline/contracts/calls';
+import { inputClass } from '../../components/field.tsx';
+import { ApiError } from '../../lib/api-client.ts';
+import { useState } from 'react';
+import { useNavigate } from 'react-router-dom';
 
 export function GamePage() {
   const { id = '' } = useParams();
@@ -80,24 +87,115 @@ export function GamePage() {
             <dd className="tabular">{formatMoney(g.pricePerPlayCents, locale)}</dd>
             <dt className="font-semibold">Model year</dt>
             <dd className="tabular">{g.model.year ?? '—'}</dd>
+            {g.tagToken && (
+              <>
+                <dt className="font-semibold">Game tag</dt>
+                <dd>
+                  <a className="link" href={`/t/${g.tagToken}`} target="_blank" rel="noreferrer">
+                    Open the report page
+                  </a>
+                </dd>
+              </>
+            )}
           </dl>
           {g.notes && <p className="mt-3 rounded-md bg-brass-light p-2 text-sm">{g.notes}</p>}
         </section>
-        <section className="card lg:col-span-2" aria-labelledby="game-activity">
-          <h2 id="game-activity" className="mb-3 text-lg font-bold">
-            History
-          </h2>
-          {!canAudit ? (
-            <p className="text-ink-soft">Service calls, work and collections for this game will show here.</p>
-          ) : activity.isLoading ? (
-            <Loading />
-          ) : activity.data?.items.length ? (
-            <ActivityList items={activity.data.items} locale={locale} />
-          ) : (
-            <Empty title="No changes recorded yet." />
-          )}
-        </section>
+        <GameCalls gameId={g.id} title={g.model.title} canReport={!g.retiredAt} />
+        {canAudit && (
+          <section className="card lg:col-span-3" aria-labelledby="game-activity">
+            <h2 id="game-activity" className="mb-3 text-lg font-bold">
+              Changes
+            </h2>
+            {activity.isLoading ? (
+              <Loading />
+            ) : activity.data?.items.length ? (
+              <ActivityList items={activity.data.items} locale={locale} />
+            ) : (
+              <Empty title="No changes recorded yet." />
+            )}
+          </section>
+        )}
       </div>
     </>
+  );
+}
+
+function GameCalls({ gameId, title, canReport }: { gameId: string; title: string; canReport: boolean }) {
+  const calls = useCalls({ gameId, state: 'all', sort: 'openedAt', order: 'desc', limit: 20 });
+  const canOpen = useCan('calls:open') && canReport;
+  const locale = useLocaleSettings();
+  const open = useOpenCall();
+  const navigate = useNavigate();
+  const [problem, setProblem] = useState<ProblemKind>('dead');
+  const [note, setNote] = useState('');
+  const [error, setError] = useState<string | null>(null);
+  return (
+    <section className="card lg:col-span-2" aria-labelledby="game-calls">
+      <h2 id="game-calls" className="mb-3 text-lg font-bold">
+        Service calls
+      </h2>
+      {calls.isLoading ? (
+        <Loading />
+      ) : calls.error ? (
+        <ErrorState error={calls.error} onRetry={() => calls.refetch()} />
+      ) : !calls.data?.items.length ? (
+        <Empty title="No service calls for this game yet." />
+      ) : (
+        <ul className="divide-y divide-paper-line">
+          {calls.data.items.map((c) => (
+            <li key={c.id} className="flex flex-wrap items-center justify-between gap-2 py-2">
+              <span>
+                <Link className="link tabular" to={paths.call(c.id)}>
+                  {callRef(c.id)}
+                </Link>{' '}
+                {problemLabels[c.problem]}
+                <br />
+                <span className="text-sm text-ink-muted">{formatDateTime(c.openedAt, locale)}</span>
+              </span>
+              <CallStateBadge state={c.state} />
+            </li>
+          ))}
+        </ul>
+      )}
+      {canOpen && (
+        <form
+          className="mt-4 grid gap-2 border-t border-paper-line pt-4 sm:grid-cols-[auto_1fr_auto] sm:items-end"
+          onSubmit={(e) => {
+            e.preventDefault();
+            setError(null);
+            open.mutate(
+              { gameId, problem, note },
+              {
+                onSuccess: (c) => navigate(paths.call(c.id)),
+                onError: (err) => setError(err instanceof ApiError ? err.message : 'Could not open the call.'),
+              },
+            );
+          }}
+        >
+          <label className="grid gap-1">
+            <span className="font-semibold">Open a call for {title}</span>
+            <select className={inputClass} value={problem} onChange={(e) => setProblem(e.target.value as ProblemKind)}>
+              {problemKinds.map((k) => (
+                <option key={k} value={k}>
+                  {problemLabels[k]}
+                </option>
+              ))}
+            </select>
+          </label>
+          <label className="grid gap-1">
+            <span className="font-semibold">Note</span>
+            <input className={inputClass} value={note} maxLength={2000} onChange={(e) => setNote(e.target.value)} />
+          </label>
+          <button type="submit" className="btn-primary" disabled={open.isPending}>
+            Open call
+          </button>
+          {error && (
+            <p role="alert" className="font-semibold text-down sm:col-span-3">
+              {error}
+            </p>
+          )}
+        </form>
+      )}
+    </section>
   );
 }

@@ -1,4 +1,4 @@
-// The first screen after sign-in: what needs attention now. Venue contacts get their venue view.
+// Today: what needs attention now on the route.
 import { Link } from 'react-router-dom';
 import { gameStatusLabels, gameStatuses } from '@bumperline/contracts/games';
 import { PageHeader } from '../../components/page-header.tsx';
@@ -7,10 +7,14 @@ import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { paths } from '../../app/paths.ts';
 import { useMe } from '../../api/me.ts';
 import { useGameSummary, useGames } from '../../api/games.ts';
+import { useCalls } from '../../api/calls.ts';
+import { useCan } from '../../api/use-can.ts';
+import { CallStateBadge } from '../../components/call-state-badge.tsx';
+import { TargetClock } from '../../components/target-clock.tsx';
+import { callRef } from '@bumperline/contracts/calls';
 
 export function HomePage() {
   const me = useMe();
-  if (me.data?.role === 'venue_contact') return <VenueContactHome company={me.data.company?.name ?? ''} />;
   return <TodayPage firstName={me.data?.user.name.split(' ')[0] ?? ''} />;
 }
 
@@ -48,6 +52,7 @@ function TodayPage({ firstName }: { firstName: string }) {
           </ul>
         )}
       </section>
+      <OpenCalls />
       <section className="card" aria-labelledby="down-now">
         <h2 id="down-now" className="mb-3 text-lg font-bold">
           Down now
@@ -75,16 +80,42 @@ function TodayPage({ firstName }: { firstName: string }) {
   );
 }
 
-function VenueContactHome({ company }: { company: string }) {
+/** The calls closest to (or past) their response target, or a technician's own calls. */
+function OpenCalls() {
+  const canDispatch = useCan('calls:dispatch');
+  const canRead = useCan('calls:read');
+  const calls = useCalls({ state: 'open', sort: 'targetAt', order: 'asc', limit: 8, technicianId: canDispatch ? undefined : 'me' });
+  if (!canRead) return null;
   return (
-    <>
-      <PageHeader title="Your venue view" subtitle={`Your games are looked after by ${company}.`} />
-      <section className="card max-w-2xl">
-        <p>
-          You are signed in as a venue contact. To report a game that is not working, scan the game tag (the QR sticker) on its cabinet, or
-          call {company}.
-        </p>
-      </section>
-    </>
+    <section className="card mb-4" aria-labelledby="open-calls">
+      <h2 id="open-calls" className="mb-3 text-lg font-bold">
+        {canDispatch ? 'Calls closest to their target' : 'My calls'}
+      </h2>
+      {calls.isLoading ? (
+        <Loading />
+      ) : calls.error ? (
+        <ErrorState error={calls.error} onRetry={() => calls.refetch()} />
+      ) : !calls.data?.items.length ? (
+        <Empty title={canDispatch ? 'No open calls.' : 'No calls assigned to you.'} />
+      ) : (
+        <ul className="divide-y divide-paper-line">
+          {calls.data.items.map((c) => (
+            <li key={c.id} className="flex flex-wrap items-center justify-between gap-3 py-2">
+              <Link className="link" to={paths.call(c.id)}>
+                <span className="tabular">{callRef(c.id)}</span> · {c.gameTitle}{' '}
+                <span className="font-normal text-ink-muted">· {c.venueName}</span>
+              </Link>
+              <span className="flex flex-wrap items-center gap-3">
+                <CallStateBadge state={c.state} />
+                <TargetClock openedAt={c.openedAt} targetAt={c.targetAt} stoppedAt={c.fixedAt} />
+              </span>
+            </li>
+          ))}
+        </ul>
+      )}
+      <Link className="link mt-3 inline-block" to={canDispatch ? paths.calls : `${paths.calls}?technicianId=me`}>
+        {canDispatch ? 'All calls on the map' : 'All my calls'}
+      </Link>
+    </section>
   );
 }

@@ -1,5 +1,5 @@
 import { Link, useParams } from 'react-router-dom';
-import { Archive, MapPin, Pencil, Phone, Mail } from 'lucide-react';
+import { Archive, MapPin, Pencil, Phone, Mail, QrCode } from 'lucide-react';
 import { PageHeader } from '../../components/page-header.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { StatusBadge } from '../../components/status-badge.tsx';
@@ -39,22 +39,28 @@ export function VenuePage() {
           </span>
         }
         actions={
-          canWrite &&
           !v.retiredAt && (
             <>
-              <Link className="btn-secondary" to={paths.editVenue(v.id)}>
-                <Pencil aria-hidden className="size-4" /> Edit
-              </Link>
-              <button
-                type="button"
-                className="btn-danger"
-                disabled={retire.isPending}
-                onClick={() => {
-                  if (window.confirm(`Retire ${v.name}? It leaves the active lists; its history stays.`)) retire.mutate();
-                }}
-              >
-                <Archive aria-hidden className="size-4" /> Retire
-              </button>
+              <a className="btn-secondary" href={`/api/venues/${v.id}/tag-sheet`} target="_blank" rel="noreferrer">
+                <QrCode aria-hidden className="size-4" /> Print game tags
+              </a>
+              {canWrite && (
+                <>
+                  <Link className="btn-secondary" to={paths.editVenue(v.id)}>
+                    <Pencil aria-hidden className="size-4" /> Edit
+                  </Link>
+                  <button
+                    type="button"
+                    className="btn-danger"
+                    disabled={retire.isPending}
+                    onClick={() => {
+                      if (window.confirm(`Retire ${v.name}? It leaves the active lists; its history stays.`)) retire.mutate();
+                    }}
+                  >
+                    <Archive aria-hidden className="size-4" /> Retire
+                  </button>
+                </>
+              )}
             </>
           )
         }

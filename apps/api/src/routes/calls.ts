@@ -1,0 +1,182 @@
+// Service calls for staff: the dispatch list, a call with its timeline, opening, moving, assigning.
+import { Router } from 'express';
+import { assignInput, callListQuery, noteInput, openCallInput, severityInput, transitionInput } from '@bumperline/contracts/calls';
+import { rankTechnicians } from '@bumperline/domain/routes/technician-ranking';
+import {
+  getCall,
+  getCallRow,
+  getPhoto,
+  insertEvent,
+  listCallMessages,
+  listCalls,
+  listEvents,
+  listPhotos,
+  listTechnicians,
+  updateCall,
+} from '@bumperline/db/queries/calls';
+import { z } from 'zod';
+import { ConflictError, NotFoundError } from '../http/errors.ts';
+import { parse } from '../http/validate.ts';
+import { idParam } from '../http/params.ts';
+import type { makeScoped, TenantActor } from '../http/guards.ts';
+import { answerAssignment, assignCall, openCall, transitionCall, type CallActor } from '../services/service-calls.ts';
+import type { PhotoStore } from '../services/photo-store.ts';
+
+const actorOf = (a: TenantActor): CallActor => ({ userId: a.userId, role: a.role, label: a.name });
+
+export function callsRouter(deps: { scoped: ReturnType<typeof makeScoped>; appOrigin: string; photos: PhotoStore }): Router {
+  const { scoped, appOrigin, photos } = deps;
+  const r = Router();
+
+  r.get(
+    '/',
+    scoped('calls:read', ({ tx, req, actor }) => {
+      const q = parse(callListQuery, req.query);
+      return listCalls(tx, { ...q, technicianId: q.technicianId === 'me' ? actor.userId : q.technicianId });
+    }),
+  );
+
+  r.post(
+    '/',
+    scoped(
+      'calls:open',
+      async ({ tx, req, actor }) => {
+        const input = parse(openCallInput, req.body);
+        const opened = await openCall(tx, { ...input, source: 'staff', actor: actorOf(actor), appOrigin });
+        return { ...(await getCall(tx, opened.callId)), joined: opened.joined };
+      },
+      201,
+    ),
+  );
+
+  r.get(
+    '/:id',
+    scoped('calls:read', async ({ tx, req }) => {
+      const id = idParam(req);
+      const call = await getCall(tx, id);
+      if (!call) throw new NotFoundError('service call');
+      const [events, messages, photoList] = await Promise.all([listEvents(tx, id), listCallMessages(tx, id), listPhotos(tx, id)]);
+      return { call, events, messages, photos: photoList };
+    }),
+  );
+
+  // Technicians ranked for this call by the domain module: distance from their home base, skills, open load.
+  r.get(
+    '/:id/technicians',
+    scoped('calls:dispatch', async ({ tx, req }) => {
+      const call = await getCall(tx, idParam(req));
+      if (!call) throw new NotFoundError('service call');
+      const techs = await listTechnicians(tx);
+      const located = techs.filter((t) => t.homeLatitude !== null && t.homeLongitude !== null);
+      const ranks =
+        call.latitude !== null && call.longitude !== null
+          ? rankTechnicians(
+              { location: { lat: call.latitude, lon: call.longitude }, requiredSkills: [call.gameKind] },
+              located.map((t) => ({
+                id: t.userId,
+                location: { lat: t.homeLatitude!, lon: t.homeLongitude! },
+                skills: t.skills,
+                openJobs: t.openCalls,
+                capacity: 6,
+              })),
+              { missingSkill: 'penalise' },
+            )
+          : [];
+      const byId = new Map(ranks.map((x) => [x.id, x]));
+      const items = techs
+        .map((t) => ({
+          userId: t.userId,
+          name: t.name,
+          skills: t.skills,
+          openCalls: t.openCalls,
+          hasPhone: !!t.phone,
+          rank: byId.get(t.userId) ?? null,
+        }))
+        .sort((a, b) => (b.rank?.score ?? -1) - (a.rank?.score ?? -1));
+      return { items };
+    }),
+  );
+
+  r.post(
+    '/:id/assign',
+    scoped('calls:dispatch', async ({ tx, req, actor }) => {
+      const input = parse(assignInput, req.body);
+      return assignCall(tx, { callId: idParam(req), ...input, actor: actorOf(actor), appOrigin });
+    }),
+  );
+
+  r.post(
+    '/:id/transition',
+    scoped('calls:work', async ({ tx, req, actor }) => {
+      const input = parse(transitionInput, req.body);
+      return transitionCall(tx, { callId: idParam(req), ...input, actor: actorOf(actor), appOrigin });
+    }),
+  );
+
+  r.post(
+    '/:id/answer',
+    scoped('calls:work', async ({ tx, req, actor }) => {
+      const { accept } = parse(z.strictObject({ accept: z.boolean() }), req.body);
+      return answerAssignment(tx, { callId: idParam(req), technicianId: actor.userId, accept, actor: actorOf(actor) });
+    }),
+  );
+
+  r.post(
+    '/:id/severity',
+    scoped('calls:dispatch', async ({ tx, req, actor }) => {
+      const id = idParam(req);
+      const { severity, version } = parse(severityInput, req.body);
+      const before = await getCallRow(tx, id);
+      if (!before) throw new NotFoundError('service call');
+      if (!(await updateCall(tx, id, version, { severity })))
+        throw new ConflictError('This call changed since you opened it.', await getCall(tx, id));
+      await insertEvent(tx, {
+        callId: id,
+        kind: 'note',
+        actorUserId: actor.userId,
+        actorLabel: actor.name,
+        detail: { severity: { from: before.severity, to: severity } },
+      });
+      return getCall(tx, id);
+    }),
+  );
+
+  r.post(
+    '/:id/notes',
+    scoped(
+      'calls:work',
+      async ({ tx, req, actor }) => {
+        const id = idParam(req);
+        const { note } = parse(noteInput, req.body);
+        if (!(await getCallRow(tx, id))) throw new NotFoundError('service call');
+        await insertEvent(tx, { callId: id, kind: 'note', actorUserId: actor.userId, actorLabel: actor.name, detail: { note } });
+        return { ok: true };
+      },
+      201,
+    ),
+  );
+
+  r.get(
+    '/:id/photos/:photoId',
+    scoped('calls:read', async ({ tx, req, res }) => {
+      const photo = await getPhoto(tx, idParam(req, 'photoId'));
+      if (!photo || photo.callId !== idParam(req)) throw new NotFoundError('photo');
+      const thumb = req.query.size === 'thumb';
+      res.type(thumb ? 'image/webp' : photo.contentType);
+      res.setHeader('Cache-Control', 'private, max-age=3600');
+      res.send(await photos.read(thumb ? photo.thumbKey : photo.storageKey));
+      return undefined;
+    }),
+  );
+
+  return r;
+}
+
+export function techniciansRouter(scoped: ReturnType<typeof makeScoped>): Router {
+  const r = Router();
+  r.get(
+    '/',
+    scoped('calls:dispatch', async ({ tx }) => ({ items: await listTechnicians(tx) })),
+  );
+  return r;
+}

@@ -1,0 +1,133 @@
+// Photos sent with a report: read into memory with hard limits, checked by their content (never by the
+// name or the type the browser claims), re-encoded so nothing but pixels survives (no EXIF, no GPS),
+// shrunk to a sensible size with a small thumbnail, then stored and recorded on the call.
+import type { Request, Response } from 'express';
+import multer from 'multer';
+import sharp from 'sharp';
+import { fileTypeFromBuffer } from 'file-type';
+import type { Tx } from '@bumperline/db/client';
+import { insertEvent, insertPhoto } from '@bumperline/db/queries/calls';
+import type { PhotoStore } from './photo-store.ts';
+
+export const PHOTO_MAX_BYTES = 10 * 1024 * 1024;
+const ACCEPTED = new Set(['image/jpeg', 'image/png', 'image/webp']);
+/** Longest edge kept: plenty to read a part number, far less than a phone camera's full size. */
+const MAX_EDGE = 2560;
+const THUMB_EDGE = 320;
+/** About 120 megapixels: a 108 MP phone photo passes, a tiny file that decodes to a huge image does not. */
+const MAX_INPUT_PIXELS = 120_000_000;
+
+/** A form that could not be read, with the status and the field to show the message beside. */
+export interface FormProblem {
+  status: 400 | 413;
+  field: string;
+  message: string;
+}
+
+export interface ParsedForm {
+  file?: Express.Multer.File;
+  problem?: FormProblem;
+}
+
+/**
+ * Reads a multipart form into req.body (fields) and memory (at most one file, field `fileField`).
+ * A limit that is hit stops the upload there; whatever fields arrived before stay in req.body.
+ */
+export function multipartForm(opts: { fileField: string; maxBytes?: number; fieldLabels?: Record<string, string> }) {
+  const maxBytes = opts.maxBytes ?? PHOTO_MAX_BYTES;
+  const upload = multer({
+    storage: multer.memoryStorage(),
+    limits: { fileSize: maxBytes, files: 1, fields: 8, parts: 10, fieldNameSize: 40, fieldSize: 16 * 1024 },
+  }).single(opts.fileField);
+  const megabytes = Math.round(maxBytes / (1024 * 1024));
+
+  function describe(err: unknown): FormProblem {
+    if (!(err instanceof multer.MulterError)) {
+      return { status: 400, field: 'form', message: 'The form did not arrive complete. Please send it again.' };
+    }
+    switch (err.code) {
+      case 'LIMIT_FILE_SIZE':
+        return {
+          status: 413,
+          field: opts.fileField,
+          message: `The photo is larger than ${megabytes} MB. Choose a smaller one, or send the report without it.`,
+        };
+      case 'LIMIT_FILE_COUNT':
+      case 'LIMIT_UNEXPECTED_FILE':
+        return { status: 400, field: opts.fileField, message: 'Send one photo at most.' };
+      case 'LIMIT_FIELD_VALUE': {
+        const label = err.field ? opts.fieldLabels?.[err.field] : undefined;
+        return label
+          ? { status: 400, field: err.field!, message: `${label} is too long.` }
+          : { status: 400, field: 'form', message: 'Part of the form is too long.' };
+      }
+      default:
+        return { status: 400, field: 'form', message: 'The form has more parts than expected. Please use the form on this page.' };
+    }
+  }
+
+  return (req: Request, res: Response): Promise<ParsedForm> =>
+    new Promise((resolve) => {
+      upload(req, res, (err: unknown) => {
+        if (err) resolve({ problem: describe(err) });
+        else resolve({ file: req.file });
+      });
+    });
+}
+
+export interface PreparedPhoto {
+  photo: Buffer;
+  thumb: Buffer;
+  contentType: 'image/jpeg';
+  width: number;
+  height: number;
+}
+
+export class PhotoRejected extends Error {}
+
+/**
+ * Checks the bytes are a JPEG, PNG or WebP picture and re-encodes it. `.rotate()` first applies the
+ * camera's orientation so the picture stays upright once the EXIF block is gone (sharp keeps no
+ * metadata unless asked). Runs before any database work, so a bad photo stores nothing.
+ */
+export async function preparePhoto(bytes: Buffer): Promise<PreparedPhoto> {
+  const type = await fileTypeFromBuffer(bytes);
+  if (!type || !ACCEPTED.has(type.mime)) throw new PhotoRejected('The photo must be a JPEG, PNG or WebP picture.');
+  try {
+    const { data, info } = await sharp(bytes, { failOn: 'error', limitInputPixels: MAX_INPUT_PIXELS })
+      .rotate()
+      .resize({ width: MAX_EDGE, height: MAX_EDGE, fit: 'inside', withoutEnlargement: true })
+      .flatten({ background: '#ffffff' })
+      .jpeg({ quality: 82, mozjpeg: true })
+      .toBuffer({ resolveWithObject: true });
+    const thumb = await sharp(data)
+      .resize({ width: THUMB_EDGE, height: THUMB_EDGE, fit: 'inside', withoutEnlargement: true })
+      .webp({ quality: 70 })
+      .toBuffer();
+    return { photo: data, thumb, contentType: 'image/jpeg', width: info.width, height: info.height };
+  } catch {
+    throw new PhotoRejected('We could not read this picture. Try another photo, or send the report without it.');
+  }
+}
+
+/** Stores a prepared photo and its thumbnail, and records it on the call and its timeline. */
+export async function savePhoto(
+  tx: Tx,
+  store: PhotoStore,
+  p: { callId: string; photo: PreparedPhoto; uploadedBy: string; actorLabel: string },
+): Promise<string> {
+  const storageKey = await store.write(p.photo.photo, 'jpg');
+  const thumbKey = await store.write(p.photo.thumb, 'webp');
+  const photoId = await insertPhoto(tx, {
+    callId: p.callId,
+    storageKey,
+    thumbKey,
+    contentType: p.photo.contentType,
+    bytes: p.photo.photo.length,
+    width: p.photo.width,
+    height: p.photo.height,
+    uploadedBy: p.uploadedBy,
+  });
+  await insertEvent(tx, { callId: p.callId, kind: 'photo', actorUserId: null, actorLabel: p.actorLabel, detail: { photoId } });
+  return photoId;
+}

@@ -1,0 +1,187 @@
+// Dispatch: open calls in a table and on a map side by side, with their age against the response target.
+import { Link } from 'react-router-dom';
+import { useQuery } from '@tanstack/react-query';
+import { callRef, callStateLabels, callStates, problemKinds, problemLabels, type ServiceCall } from '@bumperline/contracts/calls';
+import { DataTable, type Column } from '../../components/data-table.tsx';
+import { PageHeader } from '../../components/page-header.tsx';
+import { CallStateBadge } from '../../components/call-state-badge.tsx';
+import { TargetClock, useNow } from '../../components/target-clock.tsx';
+import { CallsMap } from '../../components/calls-map.tsx';
+import { useListParams } from '../../components/use-list-params.ts';
+import { inputClass } from '../../components/field.tsx';
+import { paths } from '../../app/paths.ts';
+import { allCalls, useCalls } from '../../api/calls.ts';
+import { useSettings } from '../../api/settings.ts';
+import { useVenues } from '../../api/venues.ts';
+import { useCan } from '../../api/use-can.ts';
+import { get } from '../../lib/api-client.ts';
+
+type Sort = 'targetAt' | 'openedAt';
+
+const columns: Column<ServiceCall, Sort>[] = [
+  {
+    header: 'Call',
+    cell: (c) => (
+      <Link className="link" to={paths.call(c.id)}>
+        {c.gameTitle}
+        <span className="block text-sm font-normal text-ink-muted tabular">Call {callRef(c.id)}</span>
+      </Link>
+    ),
+    csv: (c) => `${callRef(c.id)} ${c.gameTitle}`,
+  },
+  { header: 'Venue', cell: (c) => c.venueName ?? '—', csv: (c) => c.venueName },
+  { header: 'Problem', cell: (c) => problemLabels[c.problem], csv: (c) => problemLabels[c.problem], className: 'hidden 2xl:table-cell' },
+  { header: 'State', cell: (c) => <CallStateBadge state={c.state} />, csv: (c) => callStateLabels[c.state] },
+  {
+    header: 'Open for',
+    sort: 'targetAt',
+    cell: (c) => <TargetClock openedAt={c.openedAt} targetAt={c.targetAt} stoppedAt={c.fixedAt ?? c.closedAt} />,
+    csv: (c) => c.openedAt,
+  },
+  {
+    header: 'Technician',
+    cell: (c) => c.technicianName ?? <span className="font-semibold text-down">Nobody yet</span>,
+    csv: (c) => c.technicianName,
+  },
+];
+
+const ANY = '';
+
+export function CallsPage() {
+  const list = useListParams<Sort>('targetAt', ['state', 'venueId', 'problem', 'technicianId']);
+  const { params, extras } = list;
+  const canDispatch = useCan('calls:dispatch');
+  const query = {
+    q: params.q || undefined,
+    sort: params.sort,
+    order: params.order,
+    cursor: params.cursor,
+    limit: 50,
+    state: (extras.state || 'open') as 'open',
+    venueId: extras.venueId || undefined,
+    problem: (extras.problem || undefined) as ServiceCall['problem'] | undefined,
+    technicianId: extras.technicianId || undefined,
+  };
+  const calls = useCalls(query);
+  const settings = useSettings();
+  const venues = useVenues({ limit: 200, sort: 'name', order: 'asc' });
+  const technicians = useQuery({
+    queryKey: ['technicians'],
+    queryFn: () => get<{ items: { userId: string; name: string }[] }>('/api/technicians'),
+    enabled: canDispatch,
+  });
+  const now = useNow();
+  const points = (calls.data?.items ?? [])
+    .filter((c) => c.latitude !== null && c.longitude !== null)
+    .map((c) => ({
+      id: c.id,
+      lat: c.latitude!,
+      lon: c.longitude!,
+      title: `${c.gameTitle} (${callRef(c.id)})`,
+      subtitle: c.venueName ?? '',
+      state: c.state,
+      late: !c.fixedAt && Date.parse(c.targetAt) < now,
+      href: paths.call(c.id),
+    }));
+
+  return (
+    <>
+      <PageHeader title="Calls" subtitle="Every open service call, oldest against its target first." />
+      <div className="grid gap-4 xl:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
+        <DataTable
+          caption="Service calls"
+          columns={columns}
+          rows={calls.data?.items}
+          rowKey={(c) => c.id}
+          isLoading={calls.isLoading}
+          error={calls.error}
+          onRetry={() => calls.refetch()}
+          search={params.q}
+          onSearch={list.setSearch}
+          searchLabel="Search by game, venue, serial or note"
+          sort={params.sort}
+          order={params.order}
+          onSort={list.toggleSort}
+          onSortSet={list.setSort}
+          hasPrev={!!params.cursor}
+          hasNext={!!calls.data?.nextCursor}
+          onPrev={list.prevPage}
+          onNext={() => calls.data?.nextCursor && list.nextPage(calls.data.nextCursor)}
+          exportAll={() => allCalls({ ...query, cursor: undefined } as never)}
+          exportName="service-calls"
+          emptyTitle={
+            extras.state || extras.venueId || extras.problem || extras.technicianId || params.q
+              ? 'No call matches these filters.'
+              : 'No open calls. Every game is up.'
+          }
+          filters={
+            <div className="flex flex-wrap gap-2">
+              <label className="flex items-center gap-2">
+                <span className="font-semibold">State</span>
+                <select className={`${inputClass} w-auto`} value={extras.state} onChange={(e) => list.setFilter('state', e.target.value)}>
+                  <option value={ANY}>All open</option>
+                  {callStates.map((s) => (
+                    <option key={s} value={s}>
+                      {callStateLabels[s]}
+                    </option>
+                  ))}
+                  <option value="all">Any, including closed</option>
+                </select>
+              </label>
+              <label className="flex items-center gap-2">
+                <span className="font-semibold">Venue</span>
+                <select
+                  className={`${inputClass} w-auto max-w-48`}
+                  value={extras.venueId}
+                  onChange={(e) => list.setFilter('venueId', e.target.value)}
+                >
+                  <option value={ANY}>Any</option>
+                  {venues.data?.items.map((v) => (
+                    <option key={v.id} value={v.id}>
+                      {v.name}
+                    </option>
+                  ))}
+                </select>
+              </label>
+              <label className="flex items-center gap-2">
+                <span className="font-semibold">Problem</span>
+                <select
+                  className={`${inputClass} w-auto max-w-48`}
+                  value={extras.problem}
+                  onChange={(e) => list.setFilter('problem', e.target.value)}
+                >
+                  <option value={ANY}>Any</option>
+                  {problemKinds.map((k) => (
+                    <option key={k} value={k}>
+                      {problemLabels[k]}
+                    </option>
+                  ))}
+                </select>
+              </label>
+              <label className="flex items-center gap-2">
+                <span className="font-semibold">Technician</span>
+                <select
+                  className={`${inputClass} w-auto max-w-48`}
+                  value={extras.technicianId}
+                  onChange={(e) => list.setFilter('technicianId', e.target.value)}
+                >
+                  <option value={ANY}>Anyone</option>
+                  <option value="none">Nobody yet</option>
+                  <option value="me">Me</option>
+                  {technicians.data?.items.map((t) => (
+                    <option key={t.userId} value={t.userId}>
+                      {t.name}
+                    </option>
+                  ))}
+                </select>
+              </label>
+            </div>
+          }
+        />
+        <section className="card h-[28rem] p-2 xl:sticky xl:top-4 xl:h-[calc(100vh-12rem)]" aria-label="Map of the calls on this page">
+          <CallsMap points={points} tileUrl={settings.data?.mapTileUrl ?? ''} label="Map of the calls on this page" />
+        </section>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,52 @@
+// The demo scenario seeds once: a second run changes nothing, and each company sees only its own.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { sql } from 'drizzle-orm';
+import { seedDemo } from '@bumperline/db/demo/seed';
+import { demoCompany, secondCompany } from '@bumperline/db/demo/scenario';
+import { withScope } from '@bumperline/db/client';
+import { freshDatabase, type TestDatabase } from '../support/database.ts';
+
+let db: TestDatabase;
+beforeAll(async () => {
+  db = await freshDatabase();
+});
+afterAll(() => db.drop());
+
+const count = async (table: string) =>
+  ((await db.owner.execute(sql`select count(*)::int as n from ${sql.identifier(table)}`)).rows[0] as { n: number }).n;
+
+describe('demo scenario', () => {
+  it('seeds about 40 venues and 150 games with history, once', async () => {
+    expect(await seedDemo(db.owner)).toBe(true);
+    const first = {
+      venues: await count('venues'),
+      games: await count('games'),
+      calls: await count('service_calls'),
+      users: await count('users'),
+    };
+    expect(first.venues).toBe(43); // 40 for the demo company, 3 for the second
+    expect(first.games).toBe(155);
+    expect(first.calls).toBeGreaterThan(150);
+    expect(await seedDemo(db.owner)).toBe(false);
+    expect({
+      venues: await count('venues'),
+      games: await count('games'),
+      calls: await count('service_calls'),
+      users: await count('users'),
+    }).toEqual(first);
+  });
+
+  it('keeps the two companies apart under row-level security', async () => {
+    const seen = await withScope(db.app, { tenantId: secondCompany.id }, (tx) =>
+      tx.execute(sql`select count(*)::int as n, count(*) filter (where tenant_id = ${demoCompany.id})::int as leaked from venues`),
+    );
+    expect(seen.rows[0]).toEqual({ n: 3, leaked: 0 });
+  });
+
+  it('every open downtime interval belongs to a game that is down', async () => {
+    const r = await db.owner.execute(sql`
+      select count(*)::int as n from downtime_intervals d join games g on g.tenant_id = d.tenant_id and g.id = d.game_id
+      where d.ended_at is null and g.status <> 'down'`);
+    expect(r.rows[0]).toEqual({ n: 0 });
+  });
+});
