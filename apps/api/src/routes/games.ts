@@ -14,6 +14,7 @@ import {
 import { getVenue } from '@bumperline/db/queries/venues';
 import { recordAudit } from '@bumperline/db/queries/audit';
 import type { Tx } from '@bumperline/db/client';
+import { listDowntime } from '@bumperline/db/queries/calls';
 import { ConflictError, NotFoundError, ValidationError } from '../http/errors.ts';
 import { parse } from '../http/validate.ts';
 import { idParam } from '../http/params.ts';
@@ -54,6 +55,16 @@ export function gamesRouter(scoped: ReturnType<typeof makeScoped>): Router {
       const game = await getGame(tx, id);
       if (!game) throw new NotFoundError('game');
       return { ...game, tagToken: await getTagToken(tx, id) };
+    }),
+  );
+
+  // When the game was down: one row per interval (an open one has no end yet).
+  r.get(
+    '/:id/downtime',
+    scoped('games:read', async ({ tx, req }) => {
+      const id = idParam(req);
+      if (!(await getGame(tx, id))) throw new NotFoundError('game');
+      return { items: await listDowntime(tx, id) };
     }),
   );
 

@@ -68,3 +68,16 @@ export const gameSummaryQuery = () =>
     queryFn: () => get<{ byStatus: Partial<Record<Game['status'], number>>; total: number }>('/api/games/summary'),
   });
 export const useGameSummary = () => useQuery(gameSummaryQuery());
+
+export interface DowntimeInterval {
+  id: string;
+  callId: string | null;
+  startedAt: string;
+  endedAt: string | null;
+}
+export const gameDowntimeQuery = (id: string) =>
+  queryOptions({
+    queryKey: ['games', 'downtime', id] as const,
+    queryFn: () => get<{ items: DowntimeInterval[] }>(`/api/games/${id}/downtime`),
+  });
+export const useGameDowntime = (id: string) => useQuery(gameDowntimeQuery(id));

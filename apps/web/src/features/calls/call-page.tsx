@@ -320,7 +320,7 @@ function AssignPanel({ call, onError, onDone }: { call: ServiceCall; onError: (e
                     type="button"
                     className={i === 0 ? 'btn-primary' : 'btn-secondary'}
                     disabled={assign.isPending}
-                    aria-label={`Assign ${t.name}`}
+                    aria-label={`${call.technicianId ? 'Reassign to' : 'Assign'} ${t.name}`}
                     onClick={() => assign.mutate({ technicianId: t.userId, version: call.version }, { onError, onSuccess: onDone })}
                   >
                     <UserPlus aria-hidden className="size-4" /> {call.technicianId ? 'Reassign' : 'Assign'}

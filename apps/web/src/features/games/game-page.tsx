@@ -8,7 +8,8 @@ import { ActivityList } from '../../components/activity-list.tsx';
 import { paths } from '../../app/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings } from '../../api/me.ts';
-import { useGame, useRetireGame } from '../../api/games.ts';
+import { useGame, useGameDowntime, useRetireGame } from '../../api/games.ts';
+import { formatDuration, useNow } from '../../components/target-clock.tsx';
 import { useActivity } from '../../api/activity.ts';
 import { formatDate, formatDateTime, formatMoney } from '../../lib/format.ts';
 import { useCalls, useOpenCall } from '../../api/calls.ts';
@@ -101,6 +102,7 @@ export function GamePage() {
           {g.notes && <p className="mt-3 rounded-md bg-brass-light p-2 text-sm">{g.notes}</p>}
         </section>
         <GameCalls gameId={g.id} title={g.model.title} canReport={!g.retiredAt} />
+        <Downtime gameId={g.id} />
         {canAudit && (
           <section className="card lg:col-span-3" aria-labelledby="game-activity">
             <h2 id="game-activity" className="mb-3 text-lg font-bold">
@@ -195,6 +197,57 @@ function GameCalls({ gameId, title, canReport }: { gameId: string; title: string
             </p>
           )}
         </form>
+      )}
+    </section>
+  );
+}
+
+function Downtime({ gameId }: { gameId: string }) {
+  const downtime = useGameDowntime(gameId);
+  const locale = useLocaleSettings();
+  const now = useNow();
+  const items = downtime.data?.items ?? [];
+  return (
+    <section className="card lg:col-span-3" aria-labelledby="game-downtime">
+      <h2 id="game-downtime" className="mb-3 text-lg font-bold">
+        Downtime
+      </h2>
+      {downtime.isLoading ? (
+        <Loading />
+      ) : downtime.error ? (
+        <ErrorState error={downtime.error} onRetry={() => downtime.refetch()} />
+      ) : !items.length ? (
+        <Empty title="This game has not been down." />
+      ) : (
+        <table className="w-full text-left">
+          <caption className="sr-only">Downtime intervals</caption>
+          <thead className="bg-paper-dim text-sm text-ink-soft">
+            <tr>
+              <th scope="col" className="px-3 py-2">
+                Down from
+              </th>
+              <th scope="col" className="px-3 py-2">
+                Back up
+              </th>
+              <th scope="col" className="px-3 py-2 text-right">
+                For
+              </th>
+            </tr>
+          </thead>
+          <tbody>
+            {items.slice(0, 12).map((d) => (
+              <tr key={d.id} className="border-t border-paper-line">
+                <td className="px-3 py-2">{formatDateTime(d.startedAt, locale)}</td>
+                <td className="px-3 py-2">
+                  {d.endedAt ? formatDateTime(d.endedAt, locale) : <strong className="text-down">Still down</strong>}
+                </td>
+                <td className="px-3 py-2 text-right tabular">
+                  {formatDuration((d.endedAt ? Date.parse(d.endedAt) : now) - Date.parse(d.startedAt))}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
       )}
     </section>
   );
