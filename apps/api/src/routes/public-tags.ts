@@ -214,6 +214,7 @@ export function publicTagsRouter(deps: { db: Db; photos: PhotoStore; appOrigin: 
       }
 
       let opened;
+      const written: string[] = [];
       try {
         opened = await withScope(db, { tenantId: tag.tenant_id }, async (tx) => {
           const call = await openCall(tx, {
@@ -226,11 +227,13 @@ export function publicTagsRouter(deps: { db: Db; photos: PhotoStore; appOrigin: 
             actor: { userId: null, role: null, label: REPORTER },
             appOrigin,
           });
-          if (photo) await savePhoto(tx, photos, { callId: call.callId, photo, uploadedBy: 'reporter', actorLabel: REPORTER });
+          if (photo) await savePhoto(tx, photos, { callId: call.callId, photo, uploadedBy: 'reporter', actorLabel: REPORTER, written });
           const row = await getCallRow(tx, call.callId);
           return { ...call, textsToThisPhone: !!input.phone && row?.reporterPhone === input.phone && row.reporterSmsConsent };
         });
       } catch (err) {
+        // Nothing of a report that was not saved may stay on disk.
+        await Promise.all(written.map((key) => photos.remove(key).catch(() => {})));
         // The game was retired between the lookup and the report.
         if (err instanceof ValidationError) return send(res, 404, inactiveTag());
         throw err;

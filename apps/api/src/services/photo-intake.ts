@@ -114,10 +114,13 @@ export async function preparePhoto(bytes: Buffer): Promise<PreparedPhoto> {
 export async function savePhoto(
   tx: Tx,
   store: PhotoStore,
-  p: { callId: string; photo: PreparedPhoto; uploadedBy: string; actorLabel: string },
+  p: { callId: string; photo: PreparedPhoto; uploadedBy: string; actorLabel: string; written?: string[] },
 ): Promise<string> {
+  // `written` collects the stored keys so the caller can remove them if the transaction fails later.
   const storageKey = await store.write(p.photo.photo, 'jpg');
+  p.written?.push(storageKey);
   const thumbKey = await store.write(p.photo.thumb, 'webp');
+  p.written?.push(thumbKey);
   const photoId = await insertPhoto(tx, {
     callId: p.callId,
     storageKey,

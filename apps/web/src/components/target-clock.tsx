@@ -35,8 +35,9 @@ export function TargetClock({ openedAt, targetAt, stoppedAt }: { openedAt: strin
         className={`inline-flex items-center gap-1 text-sm font-semibold tabular ${late ? 'text-down' : share > 0.75 ? 'text-attention' : 'text-ink'}`}
       >
         {late && <AlarmClock aria-hidden className="size-4" />}
-        {formatDuration(age)} ·{' '}
-        {late ? `${formatDuration(end - Date.parse(targetAt))} late` : `${formatDuration(Date.parse(targetAt) - end)} left`}
+        {stoppedAt
+          ? `Fixed in ${formatDuration(age)} · ${late ? `${formatDuration(end - Date.parse(targetAt))} over target` : 'within target'}`
+          : `${formatDuration(age)} · ${late ? `${formatDuration(end - Date.parse(targetAt))} late` : `${formatDuration(Date.parse(targetAt) - end)} left`}`}
       </span>
       <span aria-hidden className="h-1.5 w-full rounded bg-paper-line">
         <span
