@@ -44,7 +44,7 @@ export default tseslint.config(
   {
     // Only the env modules read process.env.
     files: ['apps/**/*.{ts,tsx}', 'packages/**/*.ts'],
-    ignores: ['apps/api/src/env.ts', '**/*.test.ts', 'packages/db/src/lifecycle/**'],
+    ignores: ['apps/api/src/env.ts', '**/*.test.ts', 'packages/db/src/lifecycle/**', 'packages/db/src/cli/**'],
     rules: {
       'no-restricted-properties': [
         'error',

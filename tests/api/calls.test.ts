@@ -227,6 +227,87 @@ describe('the technician works the call', () => {
   });
 });
 
+describe('who may move a call, per role', () => {
+  it('owner and dispatcher may cancel; an unassigned or assigned technician and a venue contact may not', async () => {
+    const game = await owner
+      .post('/api/games')
+      .set(JSON_HEADERS)
+      .send({ modelId: a.modelId, venueId: a.venueIds[1], serial: 'ROLE-1' })
+      .expect(201);
+    const cases: [string, Agent, number][] = [
+      ['venue contact', venueContact, 403],
+      ['unassigned technician', techFar.agent, 403],
+      ['dispatcher', dispatcher, 200],
+    ];
+    for (const [who, agent, status] of cases) {
+      const call = await openCall(game.body.id, 'other');
+      const res = await agent.post(`/api/calls/${call.id}/transition`).set(JSON_HEADERS).send({ to: 'cancelled', version: call.version });
+      expect(res.status, who).toBe(status);
+      if (status === 403)
+        await dispatcher
+          .post(`/api/calls/${call.id}/transition`)
+          .set(JSON_HEADERS)
+          .send({ to: 'cancelled', version: call.version })
+          .expect(200);
+    }
+    const call = await openCall(game.body.id, 'other');
+    const assigned = await dispatcher
+      .post(`/api/calls/${call.id}/assign`)
+      .set(JSON_HEADERS)
+      .send({ technicianId: techFar.id, version: call.version })
+      .expect(200);
+    await techFar.agent
+      .post(`/api/calls/${call.id}/transition`)
+      .set(JSON_HEADERS)
+      .send({ to: 'cancelled', version: assigned.body.version })
+      .expect(403);
+    await owner
+      .post(`/api/calls/${call.id}/transition`)
+      .set(JSON_HEADERS)
+      .send({ to: 'cancelled', version: assigned.body.version })
+      .expect(200);
+  });
+
+  it('the owner may work any call through every state', async () => {
+    const game = await owner
+      .post('/api/games')
+      .set(JSON_HEADERS)
+      .send({ modelId: a.modelId, venueId: a.venueIds[1], serial: 'ROLE-2' })
+      .expect(201);
+    const call = await openCall(game.body.id, 'dead');
+    let version = (
+      await owner
+        .post(`/api/calls/${call.id}/assign`)
+        .set(JSON_HEADERS)
+        .send({ technicianId: techNear.id, version: call.version })
+        .expect(200)
+    ).body.version;
+    for (const to of ['on_the_way', 'on_site', 'waiting_parts', 'on_site', 'at_shop', 'fixed', 'on_site', 'fixed', 'closed']) {
+      const res = await owner.post(`/api/calls/${call.id}/transition`).set(JSON_HEADERS).send({ to, version }).expect(200);
+      expect(res.body.state).toBe(to);
+      version = res.body.version;
+    }
+    const [row] = await owned<{ n: number }>(sql`select count(*)::int as n from call_events where call_id = ${call.id} and kind = 'state'`);
+    expect(row!.n).toBe(9);
+  });
+
+  it('a stale version is refused with the current call, and nothing changes', async () => {
+    const game = await owner
+      .post('/api/games')
+      .set(JSON_HEADERS)
+      .send({ modelId: a.modelId, venueId: a.venueIds[1], serial: 'ROLE-3' })
+      .expect(201);
+    const call = await openCall(game.body.id, 'dead');
+    await move(dispatcher, call.id, 'cancelled');
+    const stale = await owner
+      .post(`/api/calls/${call.id}/transition`)
+      .set(JSON_HEADERS)
+      .send({ to: 'cancelled', version: call.version })
+      .expect(409);
+    expect(stale.body.current.state).toBe('cancelled');
+  });
+});
+
 describe('venue view', () => {
   it('shows the contact their venue’s games and calls only, and lets them report', async () => {
     const view = await venueContact.get('/api/venue-view').expect(200);

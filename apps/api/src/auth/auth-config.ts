@@ -3,12 +3,12 @@
 // which is what makes sign-out and removal from a company take effect at once.
 import type { ExpressAuthConfig } from '@auth/express';
 import Credentials from '@auth/express/providers/credentials';
-import { and, eq, gt, isNull } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import type { Db } from '@bumperline/db/client';
 import { createSession, findUserByEmail, revokeSession } from '@bumperline/db/queries/identity';
 import { verifyPassword } from '@bumperline/db/passwords';
-import { emailTokens, users } from '@bumperline/db/schema/index';
-import { hashToken } from './tokens.ts';
+import { users } from '@bumperline/db/schema/index';
+import { consumeEmailToken } from '@bumperline/db/queries/email-tokens';
 import type { SignInLimiter } from './sign-in-limiter.ts';
 
 export function buildAuthConfig(opts: { db: Db; secret: string; secureCookies: boolean; limiter: SignInLimiter }): ExpressAuthConfig {
@@ -44,20 +44,9 @@ export function buildAuthConfig(opts: { db: Db; secret: string; secureCookies: b
         async authorize(raw) {
           const token = typeof raw.token === 'string' ? raw.token : '';
           if (token.length < 20) return null;
-          const [used] = await db
-            .update(emailTokens)
-            .set({ usedAt: new Date() })
-            .where(
-              and(
-                eq(emailTokens.tokenHash, hashToken(token)),
-                eq(emailTokens.purpose, 'sign-in'),
-                isNull(emailTokens.usedAt),
-                gt(emailTokens.expiresAt, new Date()),
-              ),
-            )
-            .returning({ userId: emailTokens.userId });
-          if (!used) return null;
-          const [user] = await db.select().from(users).where(eq(users.id, used.userId));
+          const userId = await consumeEmailToken(db, token, 'sign-in');
+          if (!userId) return null;
+          const [user] = await db.select().from(users).where(eq(users.id, userId));
           return user ? { id: user.id, email: user.email, name: user.name } : null;
         },
       }),

@@ -2,16 +2,16 @@
 // Signing in and out themselves are Auth.js's (/auth/...).
 import { randomUUID } from 'node:crypto';
 import { Router } from 'express';
-import { and, eq, gt, isNull } from 'drizzle-orm';
+import { eq } from 'drizzle-orm';
 import { passwordResetConfirm, passwordResetRequest, signUpInput, switchCompanyInput, type Me } from '@bumperline/contracts/auth';
 import { withScope, type Db } from '@bumperline/db/client';
-import { emailTokens, memberships, tenants, users } from '@bumperline/db/schema/index';
+import { memberships, tenants, users } from '@bumperline/db/schema/index';
 import { findUserByEmail, listCompaniesOf, revokeAllSessionsOf, setActiveCompany } from '@bumperline/db/queries/identity';
 import { hashPassword } from '@bumperline/db/passwords';
 import { ValidationError } from '../http/errors.ts';
 import { requireActor } from '../http/guards.ts';
 import { parse } from '../http/validate.ts';
-import { hashToken, newToken } from '../auth/tokens.ts';
+import { consumeEmailToken, issueEmailToken } from '@bumperline/db/queries/email-tokens';
 import type { Mailer } from '../services/mailer.ts';
 import { appLink } from '../services/links.ts';
 
@@ -76,10 +76,7 @@ export function accountRouter(deps: { db: Db; mailer: Mailer; appOrigin: string 
     const { email } = parse(passwordResetRequest, req.body);
     const user = await findUserByEmail(db, email);
     if (user) {
-      const { token, hash } = newToken();
-      await db
-        .insert(emailTokens)
-        .values({ tokenHash: hash, purpose: 'password-reset', userId: user.id, expiresAt: new Date(Date.now() + RESET_TTL_MS) });
+      const token = await issueEmailToken(db, user.id, 'password-reset', RESET_TTL_MS);
       const link = appLink(appOrigin, `/reset-password?token=${token}`);
       await mailer.send({
         to: user.email,
@@ -94,21 +91,10 @@ export function accountRouter(deps: { db: Db; mailer: Mailer; appOrigin: string 
     const { token, password } = parse(passwordResetConfirm, req.body);
     const passwordHash = await hashPassword(password);
     const userId = await db.transaction(async (tx) => {
-      const [used] = await tx
-        .update(emailTokens)
-        .set({ usedAt: new Date() })
-        .where(
-          and(
-            eq(emailTokens.tokenHash, hashToken(token)),
-            eq(emailTokens.purpose, 'password-reset'),
-            isNull(emailTokens.usedAt),
-            gt(emailTokens.expiresAt, new Date()),
-          ),
-        )
-        .returning({ userId: emailTokens.userId });
-      if (!used) return undefined;
-      await tx.update(users).set({ passwordHash }).where(eq(users.id, used.userId));
-      return used.userId;
+      const usedBy = await consumeEmailToken(tx, token, 'password-reset');
+      if (!usedBy) return undefined;
+      await tx.update(users).set({ passwordHash }).where(eq(users.id, usedBy));
+      return usedBy;
     });
     if (!userId) throw new ValidationError([{ field: 'token', message: 'is invalid, used or expired: ask for a new link' }]);
     // A new password signs the person out everywhere.
@@ -121,10 +107,7 @@ export function accountRouter(deps: { db: Db; mailer: Mailer; appOrigin: string 
     const { email } = parse(passwordResetRequest, req.body);
     const user = await findUserByEmail(db, email);
     if (user) {
-      const { token, hash } = newToken();
-      await db
-        .insert(emailTokens)
-        .values({ tokenHash: hash, purpose: 'sign-in', userId: user.id, expiresAt: new Date(Date.now() + LINK_TTL_MS) });
+      const token = await issueEmailToken(db, user.id, 'sign-in', LINK_TTL_MS);
       const link = appLink(appOrigin, `/sign-in/link?token=${token}`);
       await mailer.send({
         to: user.email,

@@ -55,7 +55,10 @@ export function callsRouter(deps: { scoped: ReturnType<typeof makeScoped>; appOr
       const id = idParam(req);
       const call = await getCall(tx, id);
       if (!call) throw new NotFoundError('service call');
-      const [events, messages, photoList] = await Promise.all([listEvents(tx, id), listCallMessages(tx, id), listPhotos(tx, id)]);
+      // One transaction is one connection: its queries run one after another.
+      const events = await listEvents(tx, id);
+      const messages = await listCallMessages(tx, id);
+      const photoList = await listPhotos(tx, id);
       return { call, events, messages, photos: photoList };
     }),
   );

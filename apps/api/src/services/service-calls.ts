@@ -151,6 +151,9 @@ export async function transitionCall(
   const call = await getCallRow(tx, p.callId);
   if (!call) throw new NotFoundError('service call');
   assertMayWork(p.actor, call);
+  if (p.to === 'cancelled' && p.actor.role === 'technician') {
+    throw new ForbiddenError('Only a dispatcher or an owner can cancel a call.');
+  }
   if (call.version !== p.version) {
     throw new ConflictError('This call changed since you opened it. Here is where it stands now.', await getCall(tx, p.callId));
   }

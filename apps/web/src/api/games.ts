@@ -81,3 +81,12 @@ export const gameDowntimeQuery = (id: string) =>
     queryFn: () => get<{ items: DowntimeInterval[] }>(`/api/games/${id}/downtime`),
   });
 export const useGameDowntime = (id: string) => useQuery(gameDowntimeQuery(id));
+
+/** A new game tag: the printed QR code stops working at once. */
+export function useRegenerateTag(id: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: () => post<{ tagToken: string }>(`/api/games/${id}/regenerate-tag`),
+    onSuccess: () => qc.invalidateQueries({ queryKey: gameKeys.detail(id) }),
+  });
+}

@@ -1,4 +1,6 @@
+import type { ReactNode } from 'react';
 import { createBrowserRouter, Navigate } from 'react-router-dom';
+import type { Permission } from '@bumperline/contracts/roles';
 import { paths } from './paths.ts';
 import { AppShell } from './app-shell.tsx';
 import { RequirePermission, RequireSignedIn } from './guards.tsx';
@@ -30,6 +32,11 @@ const NewGamePage = lazyPage(() => import('../features/games/game-form-page.tsx'
 const TeamPage = lazyPage(() => import('../features/team/team-page.tsx').then((m) => m.TeamPage));
 const ActivityPage = lazyPage(() => import('../features/team/activity-page.tsx').then((m) => m.ActivityPage));
 
+/** A screen for those whose role has `permission` (the API checks the same table). */
+function guard(permission: Permission, page: ReactNode) {
+  return <RequirePermission permission={permission}>{page}</RequirePermission>;
+}
+
 /** "/" is the landing page for visitors and the Today screen once signed in. */
 function Root() {
   const me = useMe();
@@ -59,107 +66,55 @@ export const router = createBrowserRouter([
           { path: paths.today, element: <StartPage /> },
           {
             path: paths.venues,
-            element: (
-              <RequirePermission permission="venues:read">
-                <VenuesPage />
-              </RequirePermission>
-            ),
+            element: guard('venues:read', <VenuesPage />),
           },
           {
             path: paths.newVenue,
-            element: (
-              <RequirePermission permission="venues:write">
-                <NewVenuePage />
-              </RequirePermission>
-            ),
+            element: guard('venues:write', <NewVenuePage />),
           },
           {
             path: '/venues/:id',
-            element: (
-              <RequirePermission permission="venues:read">
-                <VenuePage />
-              </RequirePermission>
-            ),
+            element: guard('venues:read', <VenuePage />),
           },
           {
             path: '/venues/:id/edit',
-            element: (
-              <RequirePermission permission="venues:write">
-                <EditVenuePage />
-              </RequirePermission>
-            ),
+            element: guard('venues:write', <EditVenuePage />),
           },
           {
             path: paths.games,
-            element: (
-              <RequirePermission permission="games:read">
-                <GamesPage />
-              </RequirePermission>
-            ),
+            element: guard('games:read', <GamesPage />),
           },
           {
             path: paths.newGame,
-            element: (
-              <RequirePermission permission="games:write">
-                <NewGamePage />
-              </RequirePermission>
-            ),
+            element: guard('games:write', <NewGamePage />),
           },
           {
             path: '/games/:id',
-            element: (
-              <RequirePermission permission="games:read">
-                <GamePage />
-              </RequirePermission>
-            ),
+            element: guard('games:read', <GamePage />),
           },
           {
             path: '/games/:id/edit',
-            element: (
-              <RequirePermission permission="games:write">
-                <EditGamePage />
-              </RequirePermission>
-            ),
+            element: guard('games:write', <EditGamePage />),
           },
           {
             path: paths.calls,
-            element: (
-              <RequirePermission permission="calls:read">
-                <CallsPage />
-              </RequirePermission>
-            ),
+            element: guard('calls:read', <CallsPage />),
           },
           {
             path: '/calls/:id',
-            element: (
-              <RequirePermission permission="calls:read">
-                <CallPage />
-              </RequirePermission>
-            ),
+            element: guard('calls:read', <CallPage />),
           },
           {
             path: paths.settings,
-            element: (
-              <RequirePermission permission="settings:manage">
-                <SettingsPage />
-              </RequirePermission>
-            ),
+            element: guard('settings:manage', <SettingsPage />),
           },
           {
             path: paths.team,
-            element: (
-              <RequirePermission permission="team:read">
-                <TeamPage />
-              </RequirePermission>
-            ),
+            element: guard('team:read', <TeamPage />),
           },
           {
             path: paths.activity,
-            element: (
-              <RequirePermission permission="audit:read">
-                <ActivityPage />
-              </RequirePermission>
-            ),
+            element: guard('audit:read', <ActivityPage />),
           },
           { path: '*', element: <NotFoundPage /> },
         ],

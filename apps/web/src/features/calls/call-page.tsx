@@ -7,11 +7,13 @@ import {
   callRef,
   callStateLabels,
   problemLabels,
+  severities,
   severityLabels,
   transitions,
   type CallEvent,
   type CallState,
   type ServiceCall,
+  type Severity,
 } from '@bumperline/contracts/calls';
 import { PageHeader } from '../../components/page-header.tsx';
 import { CallStateBadge } from '../../components/call-state-badge.tsx';
@@ -27,6 +29,7 @@ import {
   useAssignCall,
   useCall,
   useRankedTechnicians,
+  useSetSeverity,
   useTransitionCall,
   type CallDetail,
 } from '../../api/calls.ts';
@@ -120,6 +123,7 @@ function CallView({ detail }: { detail: CallDetail }) {
               {call.technicianId && (call.acceptedAt ? ' (accepted)' : ' (waiting for an answer)')}
             </p>
             {call.reporterWantsSms && <p className="text-sm text-ink-soft">The reporter gets SMS updates.</p>}
+            {canDispatch && open && <SeverityPicker call={call} onError={conflict.onError} />}
           </section>
 
           {mine && call.state === 'assigned' && !call.acceptedAt && (
@@ -354,5 +358,26 @@ function NoteForm({ callId }: { callId: string }) {
         <Send aria-hidden className="size-4" /> Add note
       </button>
     </form>
+  );
+}
+
+function SeverityPicker({ call, onError }: { call: ServiceCall; onError: (e: unknown) => void }) {
+  const setSeverity = useSetSeverity(call.id);
+  return (
+    <label className="flex flex-wrap items-center gap-2">
+      <span className="font-semibold">Severity</span>
+      <select
+        className={`${inputClass} w-auto`}
+        value={call.severity}
+        disabled={setSeverity.isPending}
+        onChange={(e) => setSeverity.mutate({ severity: e.target.value as Severity, version: call.version }, { onError })}
+      >
+        {severities.map((s) => (
+          <option key={s} value={s}>
+            {severityLabels[s]}
+          </option>
+        ))}
+      </select>
+    </label>
   );
 }

@@ -8,7 +8,7 @@ import { ActivityList } from '../../components/activity-list.tsx';
 import { paths } from '../../app/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings } from '../../api/me.ts';
-import { useGame, useGameDowntime, useRetireGame } from '../../api/games.ts';
+import { useGame, useGameDowntime, useRegenerateTag, useRetireGame } from '../../api/games.ts';
 import { formatDuration, useNow } from '../../components/target-clock.tsx';
 import { useActivity } from '../../api/activity.ts';
 import { formatDate, formatDateTime, formatMoney } from '../../lib/format.ts';
@@ -95,6 +95,7 @@ export function GamePage() {
                   <a className="link" href={`/t/${g.tagToken}`} target="_blank" rel="noreferrer">
                     Open the report page
                   </a>
+                  {canWrite && <RegenerateTag gameId={g.id} />}
                 </dd>
               </>
             )}
@@ -250,5 +251,21 @@ function Downtime({ gameId }: { gameId: string }) {
         </table>
       )}
     </section>
+  );
+}
+
+function RegenerateTag({ gameId }: { gameId: string }) {
+  const regenerate = useRegenerateTag(gameId);
+  return (
+    <button
+      type="button"
+      className="mt-1 block text-sm font-semibold text-down underline"
+      disabled={regenerate.isPending}
+      onClick={() => {
+        if (window.confirm('Make a new game tag? The QR code on the cabinet stops working until you replace it.')) regenerate.mutate();
+      }}
+    >
+      {regenerate.isSuccess ? 'New tag made — print the venue’s tag sheet' : 'Replace the game tag'}
+    </button>
   );
 }
