@@ -31,6 +31,7 @@ export default defineConfig({
         extends: true,
         test: {
           name: 'unit',
+          setupFiles: ['tests/support/fast-check-seed.ts'],
           include: ['packages/**/src/**/*.test.ts', 'apps/**/src/**/*.test.{ts,tsx}', 'fakes/src/**/*.test.ts'],
           environment: 'node',
         },

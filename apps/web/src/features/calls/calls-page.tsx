@@ -63,6 +63,8 @@ export function CallsPage() {
     technicianId: extras.technicianId || undefined,
   };
   const calls = useCalls(query);
+  // The map shows every call matching the filters (up to 200), not only this page of the table.
+  const mapCalls = useCalls({ ...query, cursor: undefined, limit: 200 });
   const settings = useSettings();
   const venues = useVenues({ limit: 200, sort: 'name', order: 'asc' });
   const technicians = useQuery({
@@ -71,7 +73,7 @@ export function CallsPage() {
     enabled: canDispatch,
   });
   const now = useNow();
-  const points = (calls.data?.items ?? [])
+  const points = (mapCalls.data?.items ?? [])
     .filter((c) => c.latitude !== null && c.longitude !== null)
     .map((c) => ({
       id: c.id,
@@ -178,8 +180,8 @@ export function CallsPage() {
             </div>
           }
         />
-        <section className="card h-[28rem] p-2 xl:sticky xl:top-4 xl:h-[calc(100vh-12rem)]" aria-label="Map of the calls on this page">
-          <CallsMap points={points} tileUrl={settings.data?.mapTileUrl ?? ''} label="Map of the calls on this page" />
+        <section className="card h-[28rem] p-2 xl:sticky xl:top-4 xl:h-[calc(100vh-12rem)]" aria-label="Map of the calls matching the filters">
+          <CallsMap points={points} tileUrl={settings.data?.mapTileUrl ?? ''} label="Map of the calls matching the filters" />
         </section>
       </div>
     </>
