@@ -61,3 +61,32 @@ export function useListParams<S extends string>(defaultSort: S, extraKeys: strin
     },
   };
 }
+
+/**
+ * The props every paged list screen passes to DataTable from its list parameters and query result:
+ * rows, states, search, sort and paging.
+ */
+export function pagedTableProps<T, S extends string>(
+  list: ReturnType<typeof useListParams<S>>,
+  result: { data?: { items: T[]; nextCursor: string | null }; isLoading: boolean; error: unknown; refetch: () => unknown },
+) {
+  const { params } = list;
+  return {
+    rows: result.data?.items,
+    isLoading: result.isLoading,
+    error: result.error,
+    onRetry: () => void result.refetch(),
+    search: params.q,
+    onSearch: list.setSearch,
+    sort: params.sort,
+    order: params.order,
+    onSort: list.toggleSort,
+    onSortSet: list.setSort,
+    hasPrev: !!params.cursor,
+    hasNext: !!result.data?.nextCursor,
+    onPrev: list.prevPage,
+    onNext: () => {
+      if (result.data?.nextCursor) list.nextPage(result.data.nextCursor);
+    },
+  };
+}

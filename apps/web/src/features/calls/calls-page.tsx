@@ -7,7 +7,7 @@ import { PageHeader } from '../../components/page-header.tsx';
 import { CallStateBadge } from '../../components/call-state-badge.tsx';
 import { TargetClock, useNow } from '../../components/target-clock.tsx';
 import { CallsMap } from '../../components/calls-map.tsx';
-import { useListParams } from '../../components/use-list-params.ts';
+import { pagedTableProps, useListParams } from '../../components/use-list-params.ts';
 import { inputClass } from '../../components/field.tsx';
 import { paths } from '../../app/paths.ts';
 import { allCalls, useCalls } from '../../api/calls.ts';
@@ -93,22 +93,9 @@ export function CallsPage() {
         <DataTable
           caption="Service calls"
           columns={columns}
-          rows={calls.data?.items}
+          {...pagedTableProps(list, calls)}
           rowKey={(c) => c.id}
-          isLoading={calls.isLoading}
-          error={calls.error}
-          onRetry={() => calls.refetch()}
-          search={params.q}
-          onSearch={list.setSearch}
           searchLabel="Search by game, venue, serial or note"
-          sort={params.sort}
-          order={params.order}
-          onSort={list.toggleSort}
-          onSortSet={list.setSort}
-          hasPrev={!!params.cursor}
-          hasNext={!!calls.data?.nextCursor}
-          onPrev={list.prevPage}
-          onNext={() => calls.data?.nextCursor && list.nextPage(calls.data.nextCursor)}
           exportAll={() => allCalls({ ...query, cursor: undefined } as never)}
           exportName="service-calls"
           emptyTitle={
@@ -180,7 +167,10 @@ export function CallsPage() {
             </div>
           }
         />
-        <section className="card h-[28rem] p-2 xl:sticky xl:top-4 xl:h-[calc(100vh-12rem)]" aria-label="Map of the calls matching the filters">
+        <section
+          className="card h-[28rem] p-2 xl:sticky xl:top-4 xl:h-[calc(100vh-12rem)]"
+          aria-label="Map of the calls matching the filters"
+        >
           <CallsMap points={points} tileUrl={settings.data?.mapTileUrl ?? ''} label="Map of the calls matching the filters" />
         </section>
       </div>

@@ -4,13 +4,12 @@ import { gameKindLabels } from '@bumperline/contracts/games';
 import { PageHeader } from '../../components/page-header.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { StatusBadge } from '../../components/status-badge.tsx';
-import { ActivityList } from '../../components/activity-list.tsx';
+import { ActivitySection } from '../../components/activity-section.tsx';
 import { paths } from '../../app/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings } from '../../api/me.ts';
 import { useGame, useGameDowntime, useRegenerateTag, useRetireGame } from '../../api/games.ts';
 import { formatDuration, useNow } from '../../components/target-clock.tsx';
-import { useActivity } from '../../api/activity.ts';
 import { formatDate, formatDateTime, formatMoney } from '../../lib/format.ts';
 import { useCalls, useOpenCall } from '../../api/calls.ts';
 import { CallStateBadge } from '../../components/call-state-badge.tsx';
@@ -24,8 +23,6 @@ export function GamePage() {
   const { id = '' } = useParams();
   const game = useGame(id);
   const canWrite = useCan('games:write');
-  const canAudit = useCan('audit:read');
-  const activity = useActivity({ entityId: id }, canAudit);
   const retire = useRetireGame(id);
   const locale = useLocaleSettings();
 
@@ -104,20 +101,7 @@ export function GamePage() {
         </section>
         <GameCalls gameId={g.id} title={g.model.title} canReport={!g.retiredAt} />
         <Downtime gameId={g.id} />
-        {canAudit && (
-          <section className="card lg:col-span-3" aria-labelledby="game-activity">
-            <h2 id="game-activity" className="mb-3 text-lg font-bold">
-              Changes
-            </h2>
-            {activity.isLoading ? (
-              <Loading />
-            ) : activity.data?.items.length ? (
-              <ActivityList items={activity.data.items} locale={locale} />
-            ) : (
-              <Empty title="No changes recorded yet." />
-            )}
-          </section>
-        )}
+        <ActivitySection entityId={g.id} title="Changes" />
       </div>
     </>
   );

@@ -4,7 +4,7 @@ import { gameKindLabels, gameKinds, gameStatusLabels, gameStatuses, type Game } 
 import { DataTable, type Column } from '../../components/data-table.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
 import { StatusBadge } from '../../components/status-badge.tsx';
-import { useListParams } from '../../components/use-list-params.ts';
+import { pagedTableProps, useListParams } from '../../components/use-list-params.ts';
 import { inputClass } from '../../components/field.tsx';
 import { paths } from '../../app/paths.ts';
 import { useCan } from '../../api/use-can.ts';
@@ -66,22 +66,9 @@ export function GamesPage() {
       <DataTable
         caption="Games"
         columns={columns}
-        rows={games.data?.items}
+        {...pagedTableProps(list, games)}
         rowKey={(g) => g.id}
-        isLoading={games.isLoading}
-        error={games.error}
-        onRetry={() => games.refetch()}
-        search={params.q}
-        onSearch={list.setSearch}
         searchLabel="Search by title, maker, serial or venue"
-        sort={params.sort}
-        order={params.order}
-        onSort={list.toggleSort}
-        onSortSet={list.setSort}
-        hasPrev={!!params.cursor}
-        hasNext={!!games.data?.nextCursor}
-        onPrev={list.prevPage}
-        onNext={() => games.data?.nextCursor && list.nextPage(games.data.nextCursor)}
         exportAll={() => allGames({ q: query.q, sort: query.sort, order: query.order, status: query.status, kind: query.kind })}
         exportName="games"
         emptyTitle={params.q || extras.status || extras.kind ? 'No game matches these filters.' : 'No games yet.'}

@@ -3,13 +3,12 @@ import { Archive, MapPin, Pencil, Phone, Mail, QrCode } from 'lucide-react';
 import { PageHeader } from '../../components/page-header.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { StatusBadge } from '../../components/status-badge.tsx';
-import { ActivityList } from '../../components/activity-list.tsx';
+import { ActivitySection } from '../../components/activity-section.tsx';
 import { paths } from '../../app/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings } from '../../api/me.ts';
 import { useRetireVenue, useVenue } from '../../api/venues.ts';
 import { useGames } from '../../api/games.ts';
-import { useActivity } from '../../api/activity.ts';
 import { formatDate } from '../../lib/format.ts';
 
 const dayNames = ['Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat', 'Sun'];
@@ -19,8 +18,6 @@ export function VenuePage() {
   const venue = useVenue(id);
   const games = useGames({ venueId: id, limit: 200, sort: 'title', order: 'asc' });
   const canWrite = useCan('venues:write');
-  const canAudit = useCan('audit:read');
-  const activity = useActivity({ entityId: id }, canAudit);
   const retire = useRetireVenue(id);
   const locale = useLocaleSettings();
 
@@ -120,20 +117,7 @@ export function VenuePage() {
             {v.latitude.toFixed(5)}, {v.longitude.toFixed(5)}
           </p>
         </section>
-        {canAudit && (
-          <section className="card lg:col-span-3" aria-labelledby="venue-activity">
-            <h2 id="venue-activity" className="mb-3 text-lg font-bold">
-              Activity
-            </h2>
-            {activity.isLoading ? (
-              <Loading />
-            ) : activity.data?.items.length ? (
-              <ActivityList items={activity.data.items} locale={locale} />
-            ) : (
-              <Empty title="No changes recorded yet." />
-            )}
-          </section>
-        )}
+        <ActivitySection entityId={v.id} title="Activity" />
       </div>
     </>
   );

@@ -3,7 +3,7 @@ import { Plus } from 'lucide-react';
 import type { Venue } from '@bumperline/contracts/venues';
 import { DataTable, type Column } from '../../components/data-table.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
-import { useListParams } from '../../components/use-list-params.ts';
+import { pagedTableProps, useListParams } from '../../components/use-list-params.ts';
 import { paths } from '../../app/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { allVenues, useVenues } from '../../api/venues.ts';
@@ -58,22 +58,9 @@ export function VenuesPage() {
       <DataTable
         caption="Venues"
         columns={columns}
-        rows={venues.data?.items}
+        {...pagedTableProps(list, venues)}
         rowKey={(v) => v.id}
-        isLoading={venues.isLoading}
-        error={venues.error}
-        onRetry={() => venues.refetch()}
-        search={params.q}
-        onSearch={list.setSearch}
         searchLabel="Search venues by name, street or city"
-        sort={params.sort}
-        order={params.order}
-        onSort={list.toggleSort}
-        onSortSet={list.setSort}
-        hasPrev={!!params.cursor}
-        hasNext={!!venues.data?.nextCursor}
-        onPrev={list.prevPage}
-        onNext={() => venues.data?.nextCursor && list.nextPage(venues.data.nextCursor)}
         exportAll={() => allVenues({ q: query.q, sort: query.sort, order: query.order, includeRetired: query.includeRetired })}
         exportName="venues"
         emptyTitle={params.q ? 'No venue matches that search.' : 'No venues yet.'}
