@@ -2,7 +2,10 @@ import { Router } from 'express';
 import { venueInput, venueListQuery, venueUpdate } from '@bumperline/contracts/venues';
 import { getVenue, insertVenue, listVenues, updateVenue } from '@bumperline/db/queries/venues';
 import { recordAudit } from '@bumperline/db/queries/audit';
-import { ConflictError, NotFoundError } from '../http/errors.ts';
+import { linkVenueContact, listVenueContactMembers, listVenueContacts, unlinkVenueContact } from '@bumperline/db/queries/venue-contacts';
+import { z } from 'zod';
+import { uuid } from '@bumperline/contracts/common';
+import { ConflictError, NotFoundError, ValidationError } from '../http/errors.ts';
 import { parse } from '../http/validate.ts';
 import { idParam } from '../http/params.ts';
 import type { makeScoped } from '../http/guards.ts';
@@ -67,6 +70,58 @@ export function venuesRouter(scoped: ReturnType<typeof makeScoped>): Router {
       const after = await getVenue(tx, id);
       await recordAudit(tx, { actorUserId: actor.userId, action: 'retire', entity: 'venue', entityId: id, before, after });
       return after;
+    }),
+  );
+
+  // Venue contacts: the people who see this venue in their venue view.
+  r.get(
+    '/:id/contacts',
+    scoped('venues:read', async ({ tx, req }) => {
+      const id = idParam(req);
+      if (!(await getVenue(tx, id))) throw new NotFoundError('venue');
+      return { items: await listVenueContacts(tx, id), candidates: await listVenueContactMembers(tx) };
+    }),
+  );
+
+  r.post(
+    '/:id/contacts',
+    scoped(
+      'venues:write',
+      async ({ tx, req, actor }) => {
+        const id = idParam(req);
+        const { userId } = parse(z.strictObject({ userId: uuid }), req.body);
+        if (!(await getVenue(tx, id))) throw new NotFoundError('venue');
+        if (!(await listVenueContactMembers(tx)).some((m) => m.userId === userId)) {
+          throw new ValidationError([{ field: 'userId', message: 'is not a venue contact of this company' }]);
+        }
+        await linkVenueContact(tx, id, userId);
+        await recordAudit(tx, {
+          actorUserId: actor.userId,
+          action: 'update',
+          entity: 'venue',
+          entityId: id,
+          after: { contactAdded: userId },
+        });
+        return { items: await listVenueContacts(tx, id) };
+      },
+      201,
+    ),
+  );
+
+  r.delete(
+    '/:id/contacts/:userId',
+    scoped('venues:write', async ({ tx, req, actor }) => {
+      const id = idParam(req);
+      const userId = idParam(req, 'userId');
+      if (!(await unlinkVenueContact(tx, id, userId))) throw new NotFoundError('venue contact');
+      await recordAudit(tx, {
+        actorUserId: actor.userId,
+        action: 'update',
+        entity: 'venue',
+        entityId: id,
+        before: { contactRemoved: userId },
+      });
+      return undefined;
     }),
   );
 

@@ -2,7 +2,7 @@
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { Page } from '@bumperline/contracts/common';
 import type { Venue, VenueInput, VenueListQuery, VenueUpdate } from '@bumperline/contracts/venues';
-import { get, patch, post } from '../lib/api-client.ts';
+import { del, get, patch, post } from '../lib/api-client.ts';
 
 export const venueKeys = {
   all: ['venues'] as const,
@@ -48,5 +48,27 @@ export function useRetireVenue(id: string) {
   return useMutation({
     mutationFn: () => post<Venue>(`/api/venues/${id}/retire`),
     onSuccess: () => qc.invalidateQueries({ queryKey: venueKeys.all }),
+  });
+}
+
+export interface VenueContactPerson {
+  userId: string;
+  name: string;
+  email: string;
+}
+
+export const venueContactsQuery = (venueId: string) =>
+  queryOptions({
+    queryKey: [...venueKeys.detail(venueId), 'contacts'] as const,
+    queryFn: () => get<{ items: VenueContactPerson[]; candidates: VenueContactPerson[] }>(`/api/venues/${venueId}/contacts`),
+  });
+export const useVenueContacts = (venueId: string) => useQuery(venueContactsQuery(venueId));
+
+export function useLinkVenueContact(venueId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (v: { userId: string; link: boolean }) =>
+      v.link ? post(`/api/venues/${venueId}/contacts`, { userId: v.userId }) : del(`/api/venues/${venueId}/contacts/${v.userId}`),
+    onSuccess: () => qc.invalidateQueries({ queryKey: venueContactsQuery(venueId).queryKey }),
   });
 }

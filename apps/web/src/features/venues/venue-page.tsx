@@ -4,6 +4,7 @@ import { PageHeader } from '../../components/page-header.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { StatusBadge } from '../../components/status-badge.tsx';
 import { ActivitySection } from '../../components/activity-section.tsx';
+import { VenueContactsSection } from './venue-contacts-section.tsx';
 import { paths } from '../../app/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings } from '../../api/me.ts';
@@ -117,6 +118,9 @@ export function VenuePage() {
             {v.latitude.toFixed(5)}, {v.longitude.toFixed(5)}
           </p>
         </section>
+        <div className="lg:col-span-3">
+          <VenueContactsSection venueId={v.id} />
+        </div>
         <ActivitySection entityId={v.id} title="Activity" />
       </div>
     </>
