@@ -10,6 +10,7 @@ import type { Express } from 'express';
 import { createApp } from '@bumperline/api/app';
 import { createMailer } from '@bumperline/api/services/mailer';
 import { SignInLimiter } from '@bumperline/api/auth/sign-in-limiter';
+import { postgresCounter } from '@bumperline/api/http/rate-limit-counter';
 import { startMailFake, type MailFake } from '@bumperline/fakes/mail/mail-fake';
 import { startSmsFake, type SmsFake } from '@bumperline/fakes/sms/sms-fake';
 import { createSmsSender, type SmsSender } from '@bumperline/api/services/sms';
@@ -78,7 +79,7 @@ export async function buildTestApp(opts: { signInLimit?: number; sms?: boolean }
     photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
     appOrigin: ORIGIN,
     mailFake: mail,
-    signInLimiter: new SignInLimiter(opts.signInLimit ?? 50),
+    signInLimiter: new SignInLimiter(postgresCounter(db.app), opts.signInLimit ?? 50),
   });
   sms?.server.on('request', app);
   return {

@@ -12,6 +12,7 @@ import { InvalidCursorError } from '@bumperline/db/queries/keyset';
 import { buildAuthConfig } from './auth/auth-config.ts';
 import { loadActor } from './auth/load-actor.ts';
 import { SignInLimiter } from './auth/sign-in-limiter.ts';
+import { postgresCounter } from './http/rate-limit-counter.ts';
 import { csrfGuard } from './http/csrf.ts';
 import { makeScoped } from './http/guards.ts';
 import { notFoundHandler, problemHandler } from './http/problem-details.ts';
@@ -85,7 +86,7 @@ export function createApp(deps: AppDeps): Express {
     db: deps.db,
     secret: deps.authSecret,
     secureCookies: deps.appOrigin.startsWith('https:'),
-    limiter: deps.signInLimiter ?? new SignInLimiter(),
+    limiter: deps.signInLimiter ?? new SignInLimiter(postgresCounter(deps.db)),
   });
   // Auth.js reads the client address from this header for rate limiting; never trust the client's own.
   app.use('/auth', (req, _res, next) => {

@@ -29,11 +29,11 @@ export function buildAuthConfig(opts: { db: Db; secret: string; secureCookies: b
           const email = typeof raw.email === 'string' ? raw.email.trim().toLowerCase() : '';
           const password = typeof raw.password === 'string' ? raw.password : '';
           const ip = request.headers.get('x-bumperline-client-ip') ?? 'unknown';
-          if (!email || !password || !limiter.allow(email, ip)) return null;
+          if (!email || !password || !(await limiter.allow(email, ip))) return null;
           const user = await findUserByEmail(db, email);
           const ok = await verifyPassword(user?.passwordHash, password);
           if (!user || !ok) return null;
-          limiter.reset(email, ip);
+          await limiter.reset(email, ip);
           return { id: user.id, email: user.email, name: user.name };
         },
       }),

@@ -1,26 +1,22 @@
-// Slows password guessing: at most `max` failed attempts per e-mail and address within the window.
-// In memory per API instance (common practice for a first line; a shared store would span instances).
+// Slows password guessing: at most `max` attempts per e-mail and address within the window, counted
+// in the shared HitCounter (PostgreSQL in the product) so that every API instance sees the same count.
+import type { HitCounter } from '../http/rate-limit-counter.ts';
+
 export class SignInLimiter {
-  private attempts = new Map<string, number[]>();
   constructor(
+    private readonly counter: HitCounter,
     private readonly max = 10,
     private readonly windowMs = 15 * 60_000,
   ) {}
 
-  /** Counts this attempt; false when the limit is already reached. */
-  allow(email: string, ip: string, now = Date.now()): boolean {
-    const key = `${email}|${ip}`;
-    const recent = (this.attempts.get(key) ?? []).filter((t) => now - t < this.windowMs);
-    if (recent.length >= this.max) {
-      this.attempts.set(key, recent);
-      return false;
-    }
-    recent.push(now);
-    this.attempts.set(key, recent);
-    return true;
+  /** Counts this attempt; false once the limit is passed. */
+  async allow(email: string, ip: string): Promise<boolean> {
+    const { hits } = await this.counter.hit(`sign-in:${email}|${ip}`, this.windowMs);
+    return hits <= this.max;
   }
 
-  reset(email: string, ip: string): void {
-    this.attempts.delete(`${email}|${ip}`);
+  /** A successful sign-in clears the count. */
+  async reset(email: string, ip: string): Promise<void> {
+    await this.counter.reset(`sign-in:${email}|${ip}`);
   }
 }

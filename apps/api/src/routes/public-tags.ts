@@ -16,6 +16,7 @@ import { tenants } from '@bumperline/db/schema/index';
 import { ValidationError } from '../http/errors.ts';
 import { openCall } from '../services/service-calls.ts';
 import type { PhotoStore } from '../services/photo-store.ts';
+import { CounterStore, postgresCounter } from '../http/rate-limit-counter.ts';
 import { appLink } from '../services/links.ts';
 import { multipartForm, PHOTO_MAX_BYTES, PhotoRejected, preparePhoto, savePhoto, type PreparedPhoto } from '../services/photo-intake.ts';
 import { reportPage, type ReportErrors, type ReportField, type ReportValues } from '../public-pages/report-page.ts';
@@ -128,14 +129,18 @@ export function publicTagsRouter(deps: { db: Db; photos: PhotoStore; appOrigin: 
   const r = Router();
 
   const limiterBase = { standardHeaders: 'draft-8', legacyHeaders: false, requestPropertyName: 'reportLimit' } as const;
+  // Counted in PostgreSQL, so a flood is stopped whichever API instance it reaches.
+  const counter = postgresCounter(db);
   const byAddress = rateLimit({
     ...limiterBase,
+    store: new CounterStore(counter, 'report-address'),
     windowMs: limits.perAddress.windowMs,
     limit: limits.perAddress.max,
     handler: tooMany(limits.perAddress.windowMs),
   });
   const byTag = rateLimit({
     ...limiterBase,
+    store: new CounterStore(counter, 'report-tag'),
     windowMs: limits.perTag.windowMs,
     limit: limits.perTag.max,
     keyGenerator: (req) => `tag:${tokenOf(req)}`,

@@ -1,7 +1,7 @@
 // People and their sign-in state. These rows are not owned by one operator company: a person
 // may belong to several, so they carry no tenant_id and are reached through memberships.
 import { sql } from 'drizzle-orm';
-import { boolean, index, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { boolean, index, integer, pgTable, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 
 export const users = pgTable(
   'users',
@@ -56,4 +56,14 @@ export const platformAdmins = pgTable('platform_admins', {
     .primaryKey()
     .references(() => users.id, { onDelete: 'cascade' }),
   active: boolean('active').notNull().default(true),
+});
+
+/**
+ * Rate-limit counters shared by every API instance (sign-in attempts, public reports). Keys are SHA-256
+ * hashes, so no address or e-mail is stored; a counter starts again once its window has passed.
+ */
+export const rateLimitCounters = pgTable('rate_limit_counters', {
+  key: text('key').primaryKey(),
+  hits: integer('hits').notNull(),
+  resetAt: timestamp('reset_at', { withTimezone: true }).notNull(),
 });
