@@ -72,6 +72,33 @@ function prepareDir(dir: string): void {
   chmodSync(dir, 0o700);
 }
 
+/** True while a process with this id runs (signal 0 only checks). */
+function processAlive(pid: number): boolean {
+  try {
+    process.kill(pid, 0);
+    return true;
+  } catch (err) {
+    return (err as NodeJS.ErrnoException).code === 'EPERM';
+  }
+}
+
+/**
+ * Throwaway clusters whose test run died (killed, crashed) would keep running and filling the temp dir:
+ * stop and remove those left by processes that no longer exist.
+ */
+function removeOrphanedClusters(bin: string): void {
+  const prefix = 'bumperline-pg-test-';
+  for (const name of readdirSync(os.tmpdir())) {
+    if (!name.startsWith(prefix)) continue;
+    // bumperline-pg-test-<checkout key>-<pid>-<random>
+    const pid = Number(name.slice(prefix.length).split('-')[1]);
+    if (!Number.isInteger(pid) || processAlive(pid)) continue;
+    const root = path.join(os.tmpdir(), name);
+    asServerUser(path.join(bin, 'pg_ctl'), ['-D', path.join(root, 'data'), '-m', 'immediate', '-w', 'stop']);
+    rmSync(root, { recursive: true, force: true });
+  }
+}
+
 export interface StartOptions {
   /** 'persistent' keeps data per checkout across runs; 'ephemeral' is removed on stop. */
   mode: 'persistent' | 'ephemeral';
@@ -83,6 +110,7 @@ export async function startCluster(opts: StartOptions): Promise<Cluster> {
   const log = opts.log ?? console.log;
   const bin = ensureServerInstalled(log);
   const key = createHash('sha256').update(process.cwd()).digest('hex').slice(0, 12);
+  if (opts.mode === 'ephemeral') removeOrphanedClusters(bin);
   const root =
     opts.mode === 'persistent'
       ? path.join(os.tmpdir(), `bumperline-pg-${key}`)
