@@ -8,7 +8,7 @@ import { CallStateBadge } from '../../components/call-state-badge.tsx';
 import { TargetClock, useNow } from '../../components/target-clock.tsx';
 import { CallsMap } from '../../components/calls-map.tsx';
 import { pagedTableProps, useListParams } from '../../components/use-list-params.ts';
-import { inputClass } from '../../components/field.tsx';
+import { FilterSelect } from '../../components/filter-select.tsx';
 import { paths } from '../../app/paths.ts';
 import { allCalls, useCalls } from '../../api/calls.ts';
 import { useSettings } from '../../api/settings.ts';
@@ -44,8 +44,6 @@ const columns: Column<ServiceCall, Sort>[] = [
     csv: (c) => c.technicianName,
   },
 ];
-
-const ANY = '';
 
 export function CallsPage() {
   const list = useListParams<Sort>('targetAt', ['state', 'venueId', 'problem', 'technicianId']);
@@ -105,65 +103,40 @@ export function CallsPage() {
           }
           filters={
             <div className="flex flex-wrap gap-2">
-              <label className="flex items-center gap-2">
-                <span className="font-semibold">State</span>
-                <select className={`${inputClass} w-auto`} value={extras.state} onChange={(e) => list.setFilter('state', e.target.value)}>
-                  <option value={ANY}>All open</option>
-                  {callStates.map((s) => (
-                    <option key={s} value={s}>
-                      {callStateLabels[s]}
-                    </option>
-                  ))}
-                  <option value="all">Any, including closed</option>
-                </select>
-              </label>
-              <label className="flex items-center gap-2">
-                <span className="font-semibold">Venue</span>
-                <select
-                  className={`${inputClass} w-auto max-w-48`}
-                  value={extras.venueId}
-                  onChange={(e) => list.setFilter('venueId', e.target.value)}
-                >
-                  <option value={ANY}>Any</option>
-                  {venues.data?.items.map((v) => (
-                    <option key={v.id} value={v.id}>
-                      {v.name}
-                    </option>
-                  ))}
-                </select>
-              </label>
-              <label className="flex items-center gap-2">
-                <span className="font-semibold">Problem</span>
-                <select
-                  className={`${inputClass} w-auto max-w-48`}
-                  value={extras.problem}
-                  onChange={(e) => list.setFilter('problem', e.target.value)}
-                >
-                  <option value={ANY}>Any</option>
-                  {problemKinds.map((k) => (
-                    <option key={k} value={k}>
-                      {problemLabels[k]}
-                    </option>
-                  ))}
-                </select>
-              </label>
-              <label className="flex items-center gap-2">
-                <span className="font-semibold">Technician</span>
-                <select
-                  className={`${inputClass} w-auto max-w-48`}
-                  value={extras.technicianId}
-                  onChange={(e) => list.setFilter('technicianId', e.target.value)}
-                >
-                  <option value={ANY}>Anyone</option>
-                  <option value="none">Nobody yet</option>
-                  <option value="me">Me</option>
-                  {technicians.data?.items.map((t) => (
-                    <option key={t.userId} value={t.userId}>
-                      {t.name}
-                    </option>
-                  ))}
-                </select>
-              </label>
+              <FilterSelect
+                label="State"
+                wide
+                anyLabel="All open"
+                value={extras.state ?? ''}
+                onChange={(v) => list.setFilter('state', v)}
+                options={[
+                  ...callStates.map((s) => ({ value: s, label: callStateLabels[s] })),
+                  { value: 'all', label: 'Any, including closed' },
+                ]}
+              />
+              <FilterSelect
+                label="Venue"
+                value={extras.venueId ?? ''}
+                onChange={(v) => list.setFilter('venueId', v)}
+                options={(venues.data?.items ?? []).map((v) => ({ value: v.id, label: v.name }))}
+              />
+              <FilterSelect
+                label="Problem"
+                value={extras.problem ?? ''}
+                onChange={(v) => list.setFilter('problem', v)}
+                options={problemKinds.map((k) => ({ value: k, label: problemLabels[k] }))}
+              />
+              <FilterSelect
+                label="Technician"
+                anyLabel="Anyone"
+                value={extras.technicianId ?? ''}
+                onChange={(v) => list.setFilter('technicianId', v)}
+                options={[
+                  { value: 'none', label: 'Nobody yet' },
+                  { value: 'me', label: 'Me' },
+                  ...(technicians.data?.items ?? []).map((t) => ({ value: t.userId, label: t.name })),
+                ]}
+              />
             </div>
           }
         />

@@ -5,7 +5,7 @@ import { DataTable, type Column } from '../../components/data-table.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
 import { StatusBadge } from '../../components/status-badge.tsx';
 import { pagedTableProps, useListParams } from '../../components/use-list-params.ts';
-import { inputClass } from '../../components/field.tsx';
+import { FilterSelect } from '../../components/filter-select.tsx';
 import { paths } from '../../app/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { allGames, useGames } from '../../api/games.ts';
@@ -74,28 +74,20 @@ export function GamesPage() {
         emptyTitle={params.q || extras.status || extras.kind ? 'No game matches these filters.' : 'No games yet.'}
         filters={
           <>
-            <label className="flex items-center gap-2">
-              <span className="font-semibold">Status</span>
-              <select className={`${inputClass} w-auto`} value={extras.status} onChange={(e) => list.setFilter('status', e.target.value)}>
-                <option value="">Any</option>
-                {gameStatuses.map((s) => (
-                  <option key={s} value={s}>
-                    {gameStatusLabels[s]}
-                  </option>
-                ))}
-              </select>
-            </label>
-            <label className="flex items-center gap-2">
-              <span className="font-semibold">Kind</span>
-              <select className={`${inputClass} w-auto`} value={extras.kind} onChange={(e) => list.setFilter('kind', e.target.value)}>
-                <option value="">Any</option>
-                {gameKinds.map((k) => (
-                  <option key={k} value={k}>
-                    {gameKindLabels[k]}
-                  </option>
-                ))}
-              </select>
-            </label>
+            <FilterSelect
+              label="Status"
+              wide
+              value={extras.status ?? ''}
+              onChange={(v) => list.setFilter('status', v)}
+              options={gameStatuses.map((s) => ({ value: s, label: gameStatusLabels[s] }))}
+            />
+            <FilterSelect
+              label="Kind"
+              wide
+              value={extras.kind ?? ''}
+              onChange={(v) => list.setFilter('kind', v)}
+              options={gameKinds.map((k) => ({ value: k, label: gameKindLabels[k] }))}
+            />
           </>
         }
       />
