@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { fromDecimal, roundToSignificant, toSignificantDigits } from './decimal';
+import { fromDecimal, roundToSignificant, toSignificantDigits } from './decimal.ts';
 
 describe('decimal helpers', () => {
   it('builds the double nearest the written decimal, where multiplication would not', () => {

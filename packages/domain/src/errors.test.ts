@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { DomainError, isDomainError } from './errors';
-import { requireFinite, requireInteger, requireNonNegative, requirePositive } from './input-checks';
+import { DomainError, isDomainError } from './errors.ts';
+import { requireFinite, requireInteger, requireNonNegative, requirePositive } from './input-checks.ts';
 
 describe('DomainError', () => {
   it('carries a code, an optional field and a message, and is an Error', () => {

@@ -1,4 +1,4 @@
-import { DomainError } from './errors';
+import { DomainError } from './errors.ts';
 
 /** Shared guards so every computation rejects bad numbers the same way, never passing NaN or Infinity on. */
 

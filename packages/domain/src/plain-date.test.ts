@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { dateParts, daysInMonth, epochDayFromParts, formatPlainDate, isoWeekday, isoWeekMonday, parsePlainDate } from './plain-date';
+import { dateParts, daysInMonth, epochDayFromParts, formatPlainDate, isoWeekday, isoWeekMonday, parsePlainDate } from './plain-date.ts';
 
 describe('plain dates', () => {
   it('agree with ECMAScript Date (proleptic Gregorian, ECMA-262 §21.4.1) from year 1 to 9999 (property)', () => {

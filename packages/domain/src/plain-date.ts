@@ -1,5 +1,5 @@
-import { DomainError } from './errors';
-import { describe } from './input-checks';
+import { DomainError } from './errors.ts';
+import { describe } from './input-checks.ts';
 
 /**
  * Calendar dates with no time or zone ("2024-03-31"), held as whole days since 1970-01-01 so that adding days and

@@ -1,9 +1,9 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { capacitorCodeFor, parseCapacitorCode } from './capacitor-codes';
+import { capacitorCodeFor, parseCapacitorCode } from './capacitor-codes.ts';
 
 describe('parseCapacitorCode (EIA RS-198)', () => {
-  it('104 = 100 nF, 103 = 10 nF, third digit 9 = ×0.1 (EIA RS-198, per REFERENCES.md)', () => {
+  it('104 = 100 nF, 103 = 10 nF, third digit 9 = ×0.1 (EIA RS-198 three-digit capacitance code, in pF)', () => {
     expect(parseCapacitorCode('104').farads).toBe(100e-9);
     expect(parseCapacitorCode('103').farads).toBe(10e-9);
     expect(parseCapacitorCode('109').farads).toBe(1e-12);

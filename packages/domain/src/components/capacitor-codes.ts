@@ -1,8 +1,8 @@
-import { DomainError } from '../errors';
-import { fromDecimal, nearlyEqual, toSignificantDigits } from '../decimal';
-import { describe, requireFinite } from '../input-checks';
-import type { Tolerance } from './tolerance';
-import { toleranceForLetter } from './tolerance-letters';
+import { DomainError } from '../errors.ts';
+import { fromDecimal, nearlyEqual, toSignificantDigits } from '../decimal.ts';
+import { describe, requireFinite } from '../input-checks.ts';
+import type { Tolerance } from './tolerance.ts';
+import { toleranceForLetter } from './tolerance-letters.ts';
 
 /**
  * Capacitor value codes per EIA RS-198: three digits, two significant and a multiplier, in picofarads ("104" =

@@ -1,11 +1,11 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { calendarLife, estimateLifeHours, recapDue } from './capacitor-life';
+import { calendarLife, estimateLifeHours, recapDue } from './capacitor-life.ts';
 
 const part = { ratedLifeHours: 2000, ratedTemperatureC: 105 };
 
-describe('estimateLifeHours (L = L0 × 2^((T0 − T)/10): Nippon Chemi-Con life-estimation note; TDK capacitor FAQ)', () => {
-  it('105 °C / 2,000 h part at 65 °C → 32,000 h (REFERENCES.md)', () => {
+describe('estimateLifeHours (L = L0 × 2^((T0 − T)/10): Nippon Chemi-Con, technical note "Estimating the life of aluminum electrolytic capacitors"; TDK capacitor FAQ)', () => {
+  it('105 °C / 2,000 h part at 65 °C → 32,000 h (10 °C rule: 2,000 × 2^(40/10) = 2,000 × 16)', () => {
     expect(estimateLifeHours({ ...part, operatingTemperatureC: 65 })).toBe(32_000);
   });
 
@@ -89,6 +89,28 @@ describe('recapDue', () => {
     // 85 °C / 1,000 h at 65 °C = 4,000 h → 500 days at 8 h/day.
     expect(r.limitingCapacitor).toBe(1);
     expect(r.dueDate).toBe(new Date(Date.UTC(2015, 0, 1) + 500 * 86_400_000).toISOString().slice(0, 10));
+  });
+
+  it('a life of a whole number of days lands on that exact day, not the day before', () => {
+    // 105 °C / 3,000 h at 75 °C: 3,000 × 2^((105 − 75)/10) = 24,000 h (the 10 °C rule above); at 8 h a day that is
+    // exactly 3,000 days (worked by hand), counted on from 2015-01-01 with ECMAScript Date as the calendar.
+    const r = recapDue({
+      ...board,
+      capacitors: [{ ratedLifeHours: 3000, ratedTemperatureC: 105, operatingTemperatureC: 75 }],
+      asOf: '2016-01-01',
+    });
+    expect(r.dueDate).toBe(new Date(Date.UTC(2015, 0, 1) + 3000 * 86_400_000).toISOString().slice(0, 10));
+    expect(r.dueDate).toBe('2023-03-20');
+  });
+
+  it('a fractional number of days rounds down: the recap comes no later than the life allows', () => {
+    // 32,000 h at 9 h a day = 3,555.56 days (worked by hand) → due 3,555 days on, not 3,556.
+    const r = recapDue({ ...board, hoursPerDay: 9, asOf: '2016-01-01' });
+    expect(r.dueDate).toBe(new Date(Date.UTC(2015, 0, 1) + 3555 * 86_400_000).toISOString().slice(0, 10));
+    // Capped at 15 years: 15 × 365.25 = 5,478.75 days → 5,478 (a year of 365.25 days, as calendarLife counts it).
+    const capped = recapDue({ ...board, hoursPerDay: 1, asOf: '2016-01-01' });
+    expect(capped.lifeYears).toBe(15);
+    expect(capped.dueDate).toBe(new Date(Date.UTC(2015, 0, 1) + 5478 * 86_400_000).toISOString().slice(0, 10));
   });
 
   it('reads a board date code (YYWW) and a configurable lead', () => {

@@ -1,8 +1,8 @@
-import { DomainError } from '../errors';
-import { roundToSignificant } from '../decimal';
-import { requireFinite, requireInRange, requireNonNegative, requirePositive } from '../input-checks';
-import { formatPlainDate, parsePlainDate } from '../plain-date';
-import { parseManufactureDate } from './date-codes';
+import { DomainError } from '../errors.ts';
+import { roundToSignificant } from '../decimal.ts';
+import { requireFinite, requireInRange, requireNonNegative, requirePositive } from '../input-checks.ts';
+import { formatPlainDate, parsePlainDate } from '../plain-date.ts';
+import { parseManufactureDate } from './date-codes.ts';
 
 /**
  * Electrolytic capacitor life by the Arrhenius "10 °C rule" of the makers' application notes (Nippon Chemi-Con,
@@ -48,6 +48,8 @@ export interface CalendarLifeInput extends LifeInput {
 export interface CalendarLife {
   lifeHours: number;
   years: number;
+  /** The same life in days: hours ÷ hours per day, or the age limit × 365.25. */
+  days: number;
   /** True when the 15-year (or given) limit, not the hours, sets the life. */
   limitedByAge: boolean;
 }
@@ -59,9 +61,14 @@ export function calendarLife(input: CalendarLifeInput): CalendarLife {
     throw new DomainError('out-of-range', `a day has 24 hours (got ${hoursPerDay} hours per day)`, 'hoursPerDay');
   }
   const maxYears = input.maxYears === undefined ? DEFAULT_MAX_YEARS : requirePositive(input.maxYears, 'maxYears');
-  const byHours = hoursPerDay === 0 ? Infinity : lifeHours / (hoursPerDay * DAYS_PER_YEAR);
+  // Days straight from hours: 24,000 h at 8 h a day is exactly 3,000 days, where a trip through years (÷ 365.25,
+  // then × 365.25) can come back as 2,999.999… and lose the last day.
+  const byHoursDays = hoursPerDay === 0 ? Infinity : lifeHours / hoursPerDay;
+  const byHours = byHoursDays / DAYS_PER_YEAR;
   const limitedByAge = byHours > maxYears;
-  return { lifeHours, years: limitedByAge ? maxYears : byHours, limitedByAge };
+  return limitedByAge
+    ? { lifeHours, years: maxYears, days: maxYears * DAYS_PER_YEAR, limitedByAge }
+    : { lifeHours, years: byHours, days: byHoursDays, limitedByAge };
 }
 
 export type RecapStatus = 'overdue' | 'due-soon' | 'ok';
@@ -110,8 +117,9 @@ export function recapDue(input: RecapInput): RecapDue {
   });
   const lifeYears = lives[limiting]?.years ?? 0;
 
-  // Whole days, rounded down: a recap a day early is better than a day late.
-  const due = parsePlainDate(made.date) + Math.floor(lifeYears * DAYS_PER_YEAR);
+  // A part of a day rounds down (3,555.6 days → 3,555): the due date must not be later than the life allows, and
+  // a recap a day early is better than a day late.
+  const due = parsePlainDate(made.date) + Math.floor(lives[limiting]?.days ?? 0);
   const dueDate = formatPlainDate(due);
   const daysUntil = due - today;
   const monthsUntilDue = daysUntil <= 0 ? Math.floor(daysUntil / DAYS_PER_MONTH) : Math.ceil(daysUntil / DAYS_PER_MONTH);

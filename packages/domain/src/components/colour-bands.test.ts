@@ -1,10 +1,10 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { bandsToResistance, resistanceToBands } from './colour-bands';
-import { seriesValues } from './preferred-values';
+import { bandsToResistance, resistanceToBands } from './colour-bands.ts';
+import { seriesValues } from './preferred-values.ts';
 
 describe('bandsToResistance (IEC 60062:2016)', () => {
-  it('brown-black-orange-gold is 10 kΩ ±5 % (IEC 60062:2016, per REFERENCES.md)', () => {
+  it('brown-black-orange-gold is 10 kΩ ±5 % (IEC 60062:2016, 3.2 code colours and 3.3 value and tolerance)', () => {
     const r = bandsToResistance(['brown', 'black', 'orange', 'gold']);
     expect(r.ohms).toBe(10_000);
     expect(r.tolerance).toEqual({ kind: 'percent', plus: 5, minus: 5 });
@@ -25,7 +25,7 @@ describe('bandsToResistance (IEC 60062:2016)', () => {
     expect(bandsToResistance(['yellow', 'violet', 'pink', 'gold']).ohms).toBe(0.047);
   });
 
-  it('three bands: no tolerance band means ±20 % (IEC 60062, per REFERENCES.md)', () => {
+  it('three bands: no tolerance band means ±20 % (IEC 60062:2016, 3.3)', () => {
     const r = bandsToResistance(['brown', 'black', 'red']);
     expect(r.ohms).toBe(1_000);
     expect(r.tolerance).toEqual({ kind: 'percent', plus: 20, minus: 20 });
@@ -45,6 +45,32 @@ describe('bandsToResistance (IEC 60062:2016)', () => {
   it('tolerance colours: brown F ±1, red G ±2, green D ±0.5, blue C ±0.25, violet B ±0.1 (IEC 60062, from memory)', () => {
     const letterOf = (colour: string) => bandsToResistance(['brown', 'black', 'red', colour]).toleranceLetter;
     expect(['brown', 'red', 'green', 'blue', 'violet'].map(letterOf)).toEqual(['F', 'G', 'D', 'C', 'B']);
+  });
+
+  it('the whole tolerance-colour table, and the colours that carry no tolerance', () => {
+    // IEC 60062:2016, 3.2 (code colours) and 3.3 (resistance value and tolerance). Silver, gold, brown, red, green,
+    // blue, violet and no band agree across every published chart; orange ±0.05 % (W), yellow ±0.02 % (P) and
+    // grey ±0.01 % (L) are from memory of the 2016 table (older charts give grey ±0.05 % or leave it out).
+    const table: Array<[string, number, string]> = [
+      ['silver', 10, 'K'],
+      ['gold', 5, 'J'],
+      ['brown', 1, 'F'],
+      ['red', 2, 'G'],
+      ['orange', 0.05, 'W'],
+      ['yellow', 0.02, 'P'],
+      ['green', 0.5, 'D'],
+      ['blue', 0.25, 'C'],
+      ['violet', 0.1, 'B'],
+      ['grey', 0.01, 'L'],
+    ];
+    const read = (colour: string) => bandsToResistance(['brown', 'black', 'red', colour]);
+    expect(table.map(([colour]) => [colour, read(colour).tolerance.plus, read(colour).toleranceLetter])).toEqual(table);
+    expect(table.map(([colour]) => read(colour).tolerance.minus)).toEqual(table.map(([, percent]) => percent));
+    // No band: ±20 % (M). Black, white and pink name digits or a multiplier only, never a tolerance.
+    expect(bandsToResistance(['brown', 'black', 'red'])).toMatchObject({ tolerance: { plus: 20, minus: 20 }, toleranceLetter: 'M' });
+    for (const colour of ['black', 'white', 'pink']) {
+      expect(() => read(colour)).toThrow(expect.objectContaining({ code: 'invalid-bands', field: 'bands[3]' }));
+    }
   });
 
   it('a single black band is a zero-ohm link (common practice)', () => {

@@ -1,8 +1,8 @@
-import { DomainError } from '../errors';
-import { fromDecimal, nearlyEqual, toSignificantDigits } from '../decimal';
-import { describe, requireFinite } from '../input-checks';
-import type { Tolerance } from './tolerance';
-import { letterForTolerance } from './tolerance-letters';
+import { DomainError } from '../errors.ts';
+import { fromDecimal, nearlyEqual, toSignificantDigits } from '../decimal.ts';
+import { describe, requireFinite } from '../input-checks.ts';
+import type { Tolerance } from './tolerance.ts';
+import { letterForTolerance } from './tolerance-letters.ts';
 
 /**
  * Resistor colour bands per IEC 60062:2016: 3 bands (two digits, multiplier, no tolerance band = ±20 %), 4 bands

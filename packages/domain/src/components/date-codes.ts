@@ -1,6 +1,6 @@
-import { DomainError } from '../errors';
-import { describe } from '../input-checks';
-import { dateParts, epochDayFromParts, formatPlainDate, isoWeekMonday, parsePlainDate, type EpochDay } from '../plain-date';
+import { DomainError } from '../errors.ts';
+import { describe } from '../input-checks.ts';
+import { dateParts, epochDayFromParts, formatPlainDate, isoWeekMonday, parsePlainDate, type EpochDay } from '../plain-date.ts';
 
 /**
  * When a board was made, from what is stamped or written on it: a full date ("1989-08-21"), a month ("1989-08"),
@@ -58,6 +58,9 @@ export function parseManufactureDate(code: string, asOf: string): ManufactureDat
     } else if (readsAsYearWeek) {
       day = yearWeekCode(Number(m[1]), week, today);
       precision = 'week';
+    } else if (Number(text) > thisYear && Number(text) < thisYear + 100) {
+      // "2061" in 2060 is a year still to come; "8960" is more likely a year-week with a slip in the week.
+      throw new DomainError('invalid-date', `"${code}" is after ${asOf}: a board cannot be made in the future`, 'dateCode');
     } else {
       throw new DomainError('invalid-date', `"${code}" is neither a year nor a year-week code (weeks run 01–53)`, 'dateCode');
     }

@@ -1,8 +1,16 @@
 import { describe, expect, it } from 'vitest';
-import { classifyReading, judgeBridgeRectifier, judgeDiode, type BridgeTerminal, type DiodeReading, type ProbeReading } from './diode-test';
+import {
+  classifyReading,
+  judgeBridgeRectifier,
+  judgeDiode,
+  type BridgeTerminal,
+  type DiodeReading,
+  type ProbeReading,
+} from './diode-test.ts';
 
 // Ranges: silicon junction ≈ 0.5–0.8 V forward and OL reversed; near 0 V both ways = shorted; OL both ways = open
-// (digital multimeter manuals' diode-test function, e.g. Fluke's; REFERENCES.md). Series pair 1.0–1.4 V: common practice.
+// (the diode-test function as multimeter makers describe it, e.g. Fluke, "How to test diodes using a digital
+// multimeter", application article; figures from memory). Two junctions in series read 1.0–1.4 V: common practice.
 
 describe('judgeDiode', () => {
   it.each([

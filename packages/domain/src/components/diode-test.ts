@@ -1,5 +1,5 @@
-import { DomainError } from '../errors';
-import { describe, requireNonNegative } from '../input-checks';
+import { DomainError } from '../errors.ts';
+import { describe, requireNonNegative } from '../input-checks.ts';
 
 /**
  * Diode-test readings as a multimeter shows them: the forward drop in volts, or OL when nothing conducts. A good

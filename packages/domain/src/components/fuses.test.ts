@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { checkFuseReplacement, parseFuseMarking } from './fuses';
+import { checkFuseReplacement, parseFuseMarking } from './fuses.ts';
 
 describe('parseFuseMarking (IEC 60127 markings)', () => {
   it.each([

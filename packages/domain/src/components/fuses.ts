@@ -1,6 +1,6 @@
-import { DomainError } from '../errors';
-import { fromDecimal, nearlyEqual } from '../decimal';
-import { describe, requirePositive } from '../input-checks';
+import { DomainError } from '../errors.ts';
+import { fromDecimal, nearlyEqual } from '../decimal.ts';
+import { describe, requirePositive } from '../input-checks.ts';
 
 /**
  * Miniature fuse markings per IEC 60127: speed letter (FF very quick-acting, F quick-acting, M medium, T time-lag,

@@ -1,6 +1,6 @@
-import { DomainError } from '../errors';
-import { roundToSignificant } from '../decimal';
-import { requireFinite, requireInRange, requireNonNegative, requirePositive } from '../input-checks';
+import { DomainError } from '../errors.ts';
+import { roundToSignificant } from '../decimal.ts';
+import { requireFinite, requireInRange, requireNonNegative, requirePositive } from '../input-checks.ts';
 
 /**
  * Resistor dissipation from any two of voltage, current and resistance (Ohm's law: P = VI = I²R = V²/R), checked

@@ -1,8 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { E_SERIES, isPreferredValue, nearestPreferredValue, seriesValues, type ESeries } from './preferred-values';
+import { E_SERIES, isPreferredValue, nearestPreferredValue, seriesValues, type ESeries } from './preferred-values.ts';
 
-// IEC 60063:2015 tables, from memory (E12 as given in REFERENCES.md).
+// IEC 60063:2015, Table 1 (E6 to E24) and Table 2 (E48, E96); table numbers and values from memory.
 const E6 = [1.0, 1.5, 2.2, 3.3, 4.7, 6.8];
 const E12 = [1.0, 1.2, 1.5, 1.8, 2.2, 2.7, 3.3, 3.9, 4.7, 5.6, 6.8, 8.2];
 const E24 = [1.0, 1.1, 1.2, 1.3, 1.5, 1.6, 1.8, 2.0, 2.2, 2.4, 2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 5.1, 5.6, 6.2, 6.8, 7.5, 8.2, 9.1];
@@ -21,7 +21,7 @@ describe('E-series tables (IEC 60063)', () => {
     expect(seriesValues('E24')).toEqual(E24);
   });
 
-  it('E24 is not the rounded geometric series: the standard keeps historical values (REFERENCES.md)', () => {
+  it('E24 is not the rounded geometric series: the standard keeps historical values (IEC 60063:2015, Table 1)', () => {
     const formula = Array.from({ length: 24 }, (_, i) => Math.round(10 ** (i / 24) * 10) / 10);
     const differs = E24.filter((v, i) => v !== formula[i]);
     expect(differs).toEqual([2.7, 3.0, 3.3, 3.6, 3.9, 4.3, 4.7, 8.2]);
@@ -49,6 +49,26 @@ describe('nearestPreferredValue', () => {
     expect(nearestPreferredValue(9.8, 'E12')).toBe(10); // rounds into the next decade
     expect(nearestPreferredValue(0.00123, 'E96')).toBe(0.00124);
     expect(nearestPreferredValue(330e3, 'E24')).toBe(330e3);
+  });
+
+  it('a value exactly between two neighbours by ratio is a tie, and the lower neighbour wins (our rule)', () => {
+    // √(1.5 × 2.2) ≈ 1.8166 is as far from 1.5 as from 2.2 by ratio; IEC 60063 sets no rule for ties.
+    expect(nearestPreferredValue(Math.sqrt(1.5 * 2.2), 'E6')).toBe(1.5);
+    expect(nearestPreferredValue(Math.sqrt(1.5 * 2.2) * (1 + 1e-9), 'E6')).toBe(2.2);
+    // The midpoint by difference, 1.85, is no tie: by ratio it is nearer 2.2 (2.2/1.85 = 1.189 < 1.85/1.5 = 1.233).
+    expect(nearestPreferredValue(1.85, 'E6')).toBe(2.2);
+    // Every neighbouring pair of every series (the decade's top value next to 10 included), in several decades.
+    const pairs = E_SERIES.flatMap((series) => {
+      const decade = [...seriesValues(series), 10];
+      return [-3, 0, 4].flatMap((e) =>
+        decade.slice(1).map((upper, i) => ({ series, lower: Number(`${decade[i]}e${e}`), upper: Number(`${upper}e${e}`) })),
+      );
+    });
+    expect(pairs).toHaveLength(3 * (6 + 12 + 24 + 48 + 96));
+    for (const { series, lower, upper } of pairs) {
+      expect(nearestPreferredValue(Math.sqrt(lower * upper), series)).toBe(lower);
+      expect(nearestPreferredValue(Math.sqrt(lower * upper) * (1 + 1e-9), series)).toBe(upper);
+    }
   });
 
   it('rounds up or down when asked', () => {

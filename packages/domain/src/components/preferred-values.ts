@@ -1,6 +1,6 @@
-import { DomainError } from '../errors';
-import { decimalExponent, fromDecimal } from '../decimal';
-import { describe, requirePositive } from '../input-checks';
+import { DomainError } from '../errors.ts';
+import { decimalExponent, fromDecimal } from '../decimal.ts';
+import { describe, requirePositive } from '../input-checks.ts';
 
 /**
  * Preferred number series of IEC 60063. E6, E12 and E24 are tabulated from the standard because they are not the
@@ -48,6 +48,10 @@ export type Rounding = 'nearest' | 'up' | 'down';
  * The preferred value nearest to `value`. "Nearest" is measured as a ratio, because the series are geometric: in E12,
  * 2.44 is nearer 2.7 by ratio (2.7/2.44 < 2.44/2.2) though nearer 2.2 by difference. "up" gives the smallest
  * preferred value at or above `value`, "down" the largest at or below.
+ *
+ * A tie is a value at the geometric mean of two neighbours, √(1.5 × 2.2) in E6: as far from each by ratio. IEC 60063
+ * lists the values but sets no rule for ties; ours gives the lower neighbour, and counts ratios within 1e-12 as
+ * equal so that the answer does not hang on the last bit of a logarithm.
  */
 export function nearestPreferredValue(value: number, series: ESeries, rounding: Rounding = 'nearest'): number {
   const target = requirePositive(value, 'value');
@@ -68,7 +72,7 @@ export function nearestPreferredValue(value: number, series: ESeries, rounding: 
   let bestDistance = Infinity;
   for (const candidate of candidates) {
     const distance = Math.abs(Math.log(candidate / target));
-    // Ties go to the lower value; strict < keeps the first (lower) candidate.
+    // Candidates rise, so only a clearly nearer one displaces the lower candidate of a tie.
     if (distance < bestDistance - 1e-12) {
       best = candidate;
       bestDistance = distance;

@@ -1,8 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { checkReading } from './readings';
-import { absoluteTolerance, percentTolerance } from './tolerance';
-import { toleranceForLetter } from './tolerance-letters';
+import { checkReading } from './readings.ts';
+import { absoluteTolerance, percentTolerance } from './tolerance.ts';
+import { toleranceForLetter } from './tolerance-letters.ts';
 
 describe('checkReading (check values: common practice)', () => {
   it('600 Ω ±10 % read at 570 Ω passes, window 540–660 Ω', () => {

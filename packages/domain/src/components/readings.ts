@@ -1,7 +1,7 @@
-import { DomainError } from '../errors';
-import { roundToSignificant } from '../decimal';
-import { requireNonNegative, requirePositive } from '../input-checks';
-import { toleranceWindow, type Tolerance } from './tolerance';
+import { DomainError } from '../errors.ts';
+import { roundToSignificant } from '../decimal.ts';
+import { requireNonNegative, requirePositive } from '../input-checks.ts';
+import { toleranceWindow, type Tolerance } from './tolerance.ts';
 
 /**
  * A reading taken on the bench against the parts list: is the part within its tolerance window?

@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { letterForTolerance, toleranceForLetter } from './tolerance-letters';
+import { letterForTolerance, toleranceForLetter } from './tolerance-letters.ts';
 
 describe('tolerance letters (IEC 60062:2016)', () => {
-  it('F ±1 %, G ±2 %, J ±5 %, K ±10 %, M ±20 % (IEC 60062, per REFERENCES.md)', () => {
+  it('F ±1 %, G ±2 %, J ±5 %, K ±10 %, M ±20 % (IEC 60062:2016, clause 5, letter code for tolerance; clause number from memory)', () => {
     expect(['F', 'G', 'J', 'K', 'M'].map((l) => toleranceForLetter(l).plus)).toEqual([1, 2, 5, 10, 20]);
   });
 

@@ -1,6 +1,6 @@
-import { DomainError } from '../errors';
-import { describe } from '../input-checks';
-import type { Tolerance } from './tolerance';
+import { DomainError } from '../errors.ts';
+import { describe } from '../input-checks.ts';
+import type { Tolerance } from './tolerance.ts';
 
 /**
  * Tolerance code letters of IEC 60062:2016, as printed after a value ("4K7J", "104K", "2n2Z"). Percentages of nominal;

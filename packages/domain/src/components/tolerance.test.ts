@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { absoluteTolerance, percentTolerance, toleranceWindow } from './tolerance';
+import { absoluteTolerance, percentTolerance, toleranceWindow } from './tolerance.ts';
 
 describe('toleranceWindow', () => {
   it('percent, asymmetric and absolute windows (worked by hand)', () => {

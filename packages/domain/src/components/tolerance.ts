@@ -1,6 +1,6 @@
-import { DomainError } from '../errors';
-import { roundToSignificant } from '../decimal';
-import { requireFinite, requireNonNegative } from '../input-checks';
+import { DomainError } from '../errors.ts';
+import { roundToSignificant } from '../decimal.ts';
+import { requireFinite, requireNonNegative } from '../input-checks.ts';
 
 /**
  * A part's tolerance: a percentage of nominal (±5 %, or +80/−20 % for Z-coded capacitors) or an absolute amount

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { formatQuantity, formatRkm, parseQuantity, parseValueIn } from './values';
+import { formatQuantity, formatRkm, parseQuantity, parseValueIn } from './values.ts';
 
 describe('parseQuantity: SI prefixes', () => {
   // SI Brochure, 9th edition (BIPM 2019), Table 7: p 10⁻¹², n 10⁻⁹, µ 10⁻⁶, m 10⁻³, k 10³, M 10⁶, G 10⁹, T 10¹².

@@ -1,6 +1,6 @@
-import { DomainError } from '../errors';
-import { decimalExponent, fromDecimal, roundToSignificant } from '../decimal';
-import { describe, requireFinite, requireInRange } from '../input-checks';
+import { DomainError } from '../errors.ts';
+import { decimalExponent, fromDecimal, roundToSignificant } from '../decimal.ts';
+import { describe, requireFinite, requireInRange } from '../input-checks.ts';
 
 /**
  * Component values as people write them: SI prefixes and units ("4.7 kΩ", "100nF", "250 mA", "600 ohm"), and the

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { meterDelta } from './meter-delta';
+import { meterDelta } from './meter-delta.ts';
 
 describe('meterDelta', () => {
   it('counts forward, and across a rollover at the modulus (worked by hand: 999,990 → 15 is 10 + 15 = 25)', () => {

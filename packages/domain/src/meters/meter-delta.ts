@@ -1,5 +1,5 @@
-import { DomainError } from '../errors';
-import { requireNonNegative, requirePositive } from '../input-checks';
+import { DomainError } from '../errors.ts';
+import { requireNonNegative, requirePositive } from '../input-checks.ts';
 
 /**
  * The count between two readings of a game's meter (plays, coins, power-on hours). Mechanical and electronic meters

@@ -1,7 +1,7 @@
 import { allocate, dinero, toSnapshot, USD } from 'dinero.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { allocateCents } from './allocation';
+import { allocateCents } from './allocation.ts';
 
 /** dinero.js v2 `allocate`, the reference: integer cents in, integer cents out. */
 const dineroAllocate = (amount: number, ratios: number[]) =>

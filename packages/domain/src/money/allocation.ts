@@ -1,6 +1,6 @@
-import { DomainError } from '../errors';
-import { describe } from '../input-checks';
-import { requireCents } from './cents';
+import { DomainError } from '../errors.ts';
+import { describe } from '../input-checks.ts';
+import { requireCents } from './cents.ts';
 
 /**
  * Divides an amount of cents in proportion to ratios by the largest-remainder (Hamilton) method: each part first gets

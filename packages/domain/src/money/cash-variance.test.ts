@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { cashVariance } from './cash-variance';
+import { cashVariance } from './cash-variance.ts';
 
 describe('cashVariance', () => {
   it('variance in cents and percent, flagged past the threshold (worked by hand)', () => {

@@ -1,7 +1,7 @@
-import { DomainError } from '../errors';
-import { roundToSignificant } from '../decimal';
-import { requireNonNegative } from '../input-checks';
-import { requireNonNegativeCents } from './cents';
+import { DomainError } from '../errors.ts';
+import { roundToSignificant } from '../decimal.ts';
+import { requireNonNegative } from '../input-checks.ts';
+import { requireNonNegativeCents } from './cents.ts';
 
 /**
  * Counted cash against what the meters say: the variance in cents and percent, flagged when it passes the operator's

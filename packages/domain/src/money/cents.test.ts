@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { multiplyCents, requireCents, requireNonNegativeCents } from './cents';
+import { multiplyCents, requireCents, requireNonNegativeCents } from './cents.ts';
 
 describe('cents', () => {
   it('accepts whole cents and refuses everything else', () => {

@@ -1,5 +1,5 @@
-import { DomainError } from '../errors';
-import { describe } from '../input-checks';
+import { DomainError } from '../errors.ts';
+import { describe } from '../input-checks.ts';
 
 /**
  * Money is whole minor units of the operator's currency (cents), as safe integers: never floats, so sums are exact

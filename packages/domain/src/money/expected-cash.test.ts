@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { expectedCash } from './expected-cash';
+import { expectedCash } from './expected-cash.ts';
 
 describe('expectedCash', () => {
   it('plays × price, across a meter rollover (worked by hand: 999,950 → 30 on a 1,000,000 meter is 80 plays)', () => {

@@ -1,6 +1,6 @@
-import { requireNonNegativeInteger } from '../input-checks';
-import { meterDelta } from '../meters/meter-delta';
-import { multiplyCents, requireNonNegativeCents } from './cents';
+import { requireNonNegativeInteger } from '../input-checks.ts';
+import { meterDelta } from '../meters/meter-delta.ts';
+import { multiplyCents, requireNonNegativeCents } from './cents.ts';
 
 /**
  * What the cash box should hold: plays counted on the meter since the last collection × the price per play.

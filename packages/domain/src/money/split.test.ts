@@ -1,7 +1,7 @@
 import { allocate, dinero, toSnapshot, USD } from 'dinero.js';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { splitCollection } from './split';
+import { splitCollection } from './split.ts';
 
 describe('splitCollection', () => {
   it('fees off the top, then the percentage, rounded so the parts sum to the gross (worked by hand)', () => {
@@ -11,6 +11,22 @@ describe('splitCollection', () => {
     expect(split).toMatchObject({ feesCents: 500, netCents: 9_501, venueCents: 3_800, operatorCents: 5_701, minimumApplied: false });
     // The same net split by dinero.js allocate (reference) — here the answer is the same cent for cent.
     expect(allocate(dinero({ amount: 9_501, currency: USD }), [40, 60]).map((d) => toSnapshot(d).amount)).toEqual([3_800, 5_701]);
+  });
+
+  it('a tied cent goes to the venue, the first part, as the allocator rules (worked by hand)', () => {
+    // 8.04 % of 12.50: 1250 × 804 / 10000 = 100.5 cents to the venue and 1149.5 to the operator, a tie. The
+    // allocator gives ties to the earlier part, so the venue gets 101 and the operator 1149.
+    expect(splitCollection(1_250, { venuePercent: 8.04 })).toMatchObject({ venueCents: 101, operatorCents: 1_149 });
+    // dinero.js 2.0.2 allocate in the same basis points (reference) agrees on the whole cents, 100 and 1149; it hands
+    // odd cents to the largest ratio, not to the largest remainder, so its odd cent goes to the operator instead.
+    expect(allocate(dinero({ amount: 1_250, currency: USD }), [804, 9_196]).map((d) => toSnapshot(d).amount)).toEqual([100, 1_150]);
+  });
+
+  it('reads the percentage as basis points: more than two decimals is refused, not rounded', () => {
+    expect(() => splitCollection(1_000, { venuePercent: 33.333 })).toThrow(
+      expect.objectContaining({ code: 'out-of-range', field: 'venuePercent' }),
+    );
+    expect(splitCollection(1_000, { venuePercent: 33.33 })).toMatchObject({ venueCents: 333, operatorCents: 667 });
   });
 
   it('the operator keeps its minimum; the venue gets the rest (worked by hand)', () => {

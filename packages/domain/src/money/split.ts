@@ -1,7 +1,8 @@
-import { DomainError } from '../errors';
-import { requireInRange } from '../input-checks';
-import { allocateCents } from './allocation';
-import { requireCents, requireNonNegativeCents } from './cents';
+import { fromDecimal } from '../decimal.ts';
+import { DomainError } from '../errors.ts';
+import { requireInRange } from '../input-checks.ts';
+import { allocateCents } from './allocation.ts';
+import { requireCents, requireNonNegativeCents } from './cents.ts';
 
 /**
  * The split of a collection between venue and operator by their agreement:
@@ -13,7 +14,7 @@ import { requireCents, requireNonNegativeCents } from './cents';
  */
 
 export interface SplitAgreement {
-  /** The venue's share of the net, 0–100 (decimals allowed, e.g. 42.5). */
+  /** The venue's share of the net, 0–100, to at most two decimal places (42.5, 8.04). */
   venuePercent: number;
   feesOffTheTop?: ReadonlyArray<{ label: string; cents: number }>;
   /** The operator keeps at least this much of the net. */
@@ -31,10 +32,22 @@ export interface CollectionSplit {
   notes: string[];
 }
 
+/**
+ * The percentage in whole basis points (8.04 → 804), so the operator's share is 10,000 − 804 exactly: 100 − 8.04 in
+ * floating point is 91.96000000000001, which tips a tied cent to the operator. Finer than 0.01 % is refused.
+ */
+function basisPoints(percent: number, field: string): number {
+  const points = Math.round(percent * 100);
+  if (fromDecimal(points, -2) !== percent) {
+    throw new DomainError('out-of-range', `${field} ${percent} has more than two decimal places: give it to 0.01 %`, field);
+  }
+  return points;
+}
+
 export function splitCollection(grossCents: number, agreement: SplitAgreement): CollectionSplit {
   const gross = requireNonNegativeCents(grossCents, 'grossCents');
   if (agreement === null || typeof agreement !== 'object') throw new DomainError('missing-input', 'an agreement is needed', 'agreement');
-  const venuePercent = requireInRange(agreement.venuePercent, 0, 100, 'venuePercent');
+  const venuePoints = basisPoints(requireInRange(agreement.venuePercent, 0, 100, 'venuePercent'), 'venuePercent');
   const fees = (agreement.feesOffTheTop ?? []).map((fee, i) => ({
     label: typeof fee?.label === 'string' && fee.label !== '' ? fee.label : `fee ${i + 1}`,
     cents: requireNonNegativeCents(fee?.cents, `feesOffTheTop[${i}].cents`),
@@ -50,7 +63,7 @@ export function splitCollection(grossCents: number, agreement: SplitAgreement): 
     return { grossCents: gross, fees, feesCents, netCents: net, venueCents: 0, operatorCents: net, minimumApplied: false, notes };
   }
 
-  let [venue, operator] = allocateCents(net, [venuePercent, 100 - venuePercent]) as [number, number];
+  let [venue, operator] = allocateCents(net, [venuePoints, 10_000 - venuePoints]) as [number, number];
   let minimumApplied = false;
   if (operator < minimum) {
     operator = Math.min(minimum, net);

@@ -1,13 +1,13 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { availabilityFromMeans, gameReliability, groupReliability } from './availability';
+import { availabilityFromMeans, gameReliability, groupReliability } from './availability.ts';
 
 const H = 3_600_000;
 const t0 = Date.UTC(2024, 0, 1);
 const at = (hours: number) => t0 + hours * H;
 
 describe('availability (IEC 61703 / IEC 60050-192: A = MUT / (MUT + MDT))', () => {
-  it('MTBF 600 h with MTTR 24 h gives A = 0.9615 (REFERENCES.md)', () => {
+  it('MTBF 600 h with MTTR 24 h gives A = 0.9615 (IEC 61703:2016 steady-state availability; by hand: 600 / 624)', () => {
     expect(availabilityFromMeans(600, 24)).toBeCloseTo(0.9615, 4);
   });
 

@@ -1,6 +1,6 @@
-import { DomainError } from '../errors';
-import { requirePositive, requireNonNegative } from '../input-checks';
-import { mergeDowntime, requirePeriod, type DowntimeInterval, type Period } from './downtime-intervals';
+import { DomainError } from '../errors.ts';
+import { requirePositive, requireNonNegative } from '../input-checks.ts';
+import { mergeDowntime, requirePeriod, type DowntimeInterval, type Period } from './downtime-intervals.ts';
 
 /**
  * Availability, MTBF and MTTR over a period, in the terms of IEC 60050-192 and IEC 61703 (and EN 13306):

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { mergeDowntime } from './downtime-intervals';
+import { mergeDowntime } from './downtime-intervals.ts';
 
 describe('mergeDowntime', () => {
   it('clips to the period, merges overlapping and touching intervals, and closes open ones at the period end', () => {

@@ -1,4 +1,4 @@
-import { DomainError } from '../errors';
+import { DomainError } from '../errors.ts';
 
 /**
  * Downtime as recorded: intervals that may overlap (two calls on the same dead game), run past either end of the

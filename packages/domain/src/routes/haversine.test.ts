@@ -2,7 +2,7 @@ import distance from '@turf/distance';
 import fc from 'fast-check';
 import { Geodesic } from 'geographiclib-geodesic';
 import { describe, expect, it } from 'vitest';
-import { EARTH_MEAN_RADIUS_KM, haversineKm } from './haversine';
+import { EARTH_MEAN_RADIUS_KM, haversineKm } from './haversine.ts';
 
 const point = fc.record({
   lat: fc.double({ min: -90, max: 90, noNaN: true }),
@@ -10,7 +10,7 @@ const point = fc.record({
 });
 
 describe('haversineKm', () => {
-  it('1° of latitude is 111.195 km on R1 = 6371.0088 km (IUGG; Moritz, GRS80; REFERENCES.md)', () => {
+  it('1° of latitude is 111.195 km on R1 = 6371.0088 km (Moritz, Geodetic Reference System 1980, Bulletin Géodésique 54, 1980)', () => {
     expect(EARTH_MEAN_RADIUS_KM).toBe(6371.0088);
     expect(haversineKm({ lat: 0, lon: 0 }, { lat: 1, lon: 0 })).toBeCloseTo(111.195, 3);
   });

@@ -1,5 +1,5 @@
-import { DomainError } from '../errors';
-import { requireInRange } from '../input-checks';
+import { DomainError } from '../errors.ts';
+import { requireInRange } from '../input-checks.ts';
 
 /**
  * Great-circle distance by the haversine formula on a sphere of the IUGG mean Earth radius

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { planRouteDay, type RouteDayInput, type RouteStop } from './route-day';
-import { planTour } from './tour-planner';
+import { planRouteDay, type RouteDayInput, type RouteStop } from './route-day.ts';
+import { planTour } from './tour-planner.ts';
 
 /** Points on a line, 10 minutes apart per unit: easy to reason about by hand. */
 function line(positions: number[]): number[][] {
@@ -91,6 +91,44 @@ describe('planRouteDay', () => {
     const plan = planRouteDay({ stops, travelMinutes: line([1, 1]), dayStart: 8 * 60 });
     expect(plan.visits).toHaveLength(1);
     expect(plan.unscheduled).toEqual([{ id: expect.any(String), reason: expect.stringMatching(/does not fit/) }]);
+  });
+
+  it('arriving exactly at the latest arrival time is in time; the time on site may run past it', () => {
+    // The window bounds the start of the visit, ends included, as in the vehicle-routing literature's time windows
+    // (Solomon, "Algorithms for the vehicle routing and scheduling problems with time window constraints",
+    // Operations Research 35(2), 1987: service begins within [e, l]; from memory). Leaving at 08:00, 40 minutes
+    // away: arrival 08:40 = the latest arrival; 30 minutes on site end at 09:10, after it.
+    const stop = { id: 'arcade', serviceMinutes: 30, latestArrival: 8 * 60 + 40 };
+    const plan = planRouteDay({ stops: [stop], travelMinutes: line([4]), dayStart: 8 * 60 });
+    expect(plan.unscheduled).toEqual([]);
+    expect(plan.visits).toEqual([{ id: 'arcade', arrival: 520, waitMinutes: 0, serviceStart: 520, departure: 550 }]);
+    // A minute earlier closing and the visit cannot be made.
+    const late = planRouteDay({ stops: [{ ...stop, latestArrival: 8 * 60 + 39 }], travelMinutes: line([4]), dayStart: 8 * 60 });
+    expect(late.visits).toEqual([]);
+    expect(late.unscheduled).toEqual([{ id: 'arcade', reason: expect.stringMatching(/cannot arrive by 08:39/) }]);
+  });
+
+  it('getting back exactly at the end of the day is in time; a minute later is not', () => {
+    // 08:00 + 40 out + 30 on site + 40 back = 09:50 (worked by hand).
+    const stops = [{ id: 'arcade', serviceMinutes: 30 }];
+    expect(planRouteDay({ stops, travelMinutes: line([4]), dayStart: 480, dayEnd: 590 })).toMatchObject({ returnAt: 590, unscheduled: [] });
+    expect(planRouteDay({ stops, travelMinutes: line([4]), dayStart: 480, dayEnd: 589 }).visits).toEqual([]);
+  });
+
+  it('two stops on a one-way matrix go round the cheaper way, though the other is the order given (worked by hand)', () => {
+    // start → a → b → start = 30 + 30 + 30 = 90 minutes; start → b → a → start = 10 + 10 + 10 = 30.
+    const travelMinutes = [
+      [0, 30, 10],
+      [10, 0, 30],
+      [30, 10, 0],
+    ];
+    const stops = [
+      { id: 'a', serviceMinutes: 15 },
+      { id: 'b', serviceMinutes: 15 },
+    ];
+    const plan = planRouteDay({ stops, travelMinutes, dayStart: 480 });
+    expect(plan.visits.map((v) => v.id)).toEqual(['b', 'a']);
+    expect(plan.totalTravelMinutes).toBe(30);
   });
 
   it('matches brute force on small random days: as many stops as possible, then least travel (property)', () => {

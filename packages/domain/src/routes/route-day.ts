@@ -1,8 +1,8 @@
-import { DomainError } from '../errors';
-import { requireFinite, requireNonNegative, requireNonNegativeInteger } from '../input-checks';
-import { randomInt, seededRandom, type Random } from './seeded-random';
-import { planTour } from './tour-planner';
-import { validateMatrix, type Matrix } from './travel-matrix';
+import { DomainError } from '../errors.ts';
+import { requireFinite, requireNonNegative, requireNonNegativeInteger } from '../input-checks.ts';
+import { randomInt, seededRandom, type Random } from './seeded-random.ts';
+import { planTour } from './tour-planner.ts';
+import { validateMatrix, type Matrix } from './travel-matrix.ts';
 
 /**
  * One technician's route day: the order to visit stops from a start point and back, least total cost (distance or
@@ -17,7 +17,9 @@ import { validateMatrix, type Matrix } from './travel-matrix';
 export interface RouteStop {
   id: string;
   serviceMinutes: number;
+  /** Arriving before this means waiting until it. */
   earliestArrival?: number;
+  /** The last moment to arrive, itself included; the time on site may run past it (the window bounds the arrival). */
   latestArrival?: number;
 }
 

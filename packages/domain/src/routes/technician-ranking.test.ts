@@ -1,7 +1,7 @@
 import distance from '@turf/distance';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { rankTechnicians, type TechnicianCandidate } from './technician-ranking';
+import { rankTechnicians, type TechnicianCandidate } from './technician-ranking.ts';
 
 const call = { location: { lat: 52.52, lon: 13.405 }, requiredSkills: ['Pinball'] };
 const tech = (id: string, lat: number, lon: number, skills: string[], openJobs: number, capacity?: number): TechnicianCandidate => ({

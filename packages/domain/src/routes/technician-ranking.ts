@@ -1,6 +1,6 @@
-import { DomainError } from '../errors';
-import { requireNonNegative, requireNonNegativeInteger, requirePositive } from '../input-checks';
-import { haversineKm, requireGeoPoint, type GeoPoint } from './haversine';
+import { DomainError } from '../errors.ts';
+import { requireNonNegative, requireNonNegativeInteger, requirePositive } from '../input-checks.ts';
+import { haversineKm, requireGeoPoint, type GeoPoint } from './haversine.ts';
 
 /**
  * Which technician to send to a service call: near, holding the skills the call needs, and not already swamped.

@@ -1,8 +1,8 @@
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { planTour, tourLength } from './tour-planner';
-import { parseTsplib, tsplibMatrix } from './tsplib';
+import { planTour, tourLength } from './tour-planner.ts';
+import { parseTsplib, tsplibMatrix } from './tsplib.ts';
 
 const load = (name: string) => tsplibMatrix(parseTsplib(readFileSync(new URL(`../../test-data/${name}.tsp`, import.meta.url), 'utf8')));
 
@@ -60,7 +60,7 @@ describe('planTour on TSPLIB (Reinelt 1991; optima as published)', () => {
 describe('planTour against exact optima (Held–Karp)', () => {
   const instance = (asymmetric: boolean) =>
     fc
-      .integer({ min: 4, max: 12 })
+      .integer({ min: 2, max: 12 })
       .chain((n) =>
         fc
           .array(fc.tuple(fc.integer({ min: 0, max: 1000 }), fc.integer({ min: 0, max: 1000 })), { minLength: n, maxLength: n })
@@ -98,6 +98,25 @@ describe('planTour against exact optima (Held–Karp)', () => {
       { numRuns: 60 },
     );
   }, 30_000);
+
+  it('three points on a one-way matrix: of the two orders, the cheaper, even when it is not the order given', () => {
+    // 0 → 1 → 2 → 0 costs 10 + 10 + 10 = 30; 0 → 2 → 1 → 0 costs 1 + 1 + 1 = 3 (worked by hand).
+    const m = [
+      [0, 10, 1],
+      [1, 0, 10],
+      [10, 1, 0],
+    ];
+    expect(planTour(m)).toEqual({ order: [0, 2, 1], length: 3 });
+    // From another start the cycle is the same, turned to begin there: 1 → 0 → 2 → 1.
+    expect(planTour(m, { start: 1 })).toEqual({ order: [1, 0, 2], length: 3 });
+    // Mirrored, the given order is the cheap one and stays: 0 → 1 → 2 → 0 = 1 + 1 + 1.
+    const mirrored = [
+      [0, 1, 10],
+      [10, 0, 1],
+      [1, 10, 0],
+    ];
+    expect(planTour(mirrored)).toEqual({ order: [0, 1, 2], length: 3 });
+  });
 
   it('handles one, two and three points and refuses a bad start', () => {
     expect(planTour([[0]])).toEqual({ order: [0], length: 0 });

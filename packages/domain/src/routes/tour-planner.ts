@@ -1,7 +1,7 @@
-import { DomainError } from '../errors';
-import { requireNonNegativeInteger } from '../input-checks';
-import { randomInt, seededRandom, type Random } from './seeded-random';
-import { isSymmetric, validateMatrix, type Matrix } from './travel-matrix';
+import { DomainError } from '../errors.ts';
+import { requireNonNegativeInteger } from '../input-checks.ts';
+import { randomInt, seededRandom, type Random } from './seeded-random.ts';
+import { isSymmetric, validateMatrix, type Matrix } from './travel-matrix.ts';
 
 /**
  * The shortest closed tour through every point of a distance (or travel-time) matrix, from a start and back:
@@ -59,12 +59,7 @@ export function planTour(matrix: Matrix, options: TourOptions = {}): Tour {
   const kicks = options.kicks === undefined ? defaultKicks(n) : requireNonNegativeInteger(options.kicks, 'kicks');
   if (restarts < 1) throw new DomainError('out-of-range', 'restarts must be at least 1', 'restarts');
 
-  if (n <= 3)
-    return finish(
-      matrix,
-      Array.from({ length: n }, (_, i) => i),
-      start,
-    );
+  // Three points already have two orders, which differ on a one-way matrix, so small cases all go to brute force.
   if (n <= BRUTE_FORCE_MAX) return finish(matrix, bruteForce(matrix, start), start);
 
   const search = new TourSearch(matrix, isSymmetric(matrix));

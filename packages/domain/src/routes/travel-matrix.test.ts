@@ -1,6 +1,6 @@
 import distance from '@turf/distance';
 import { describe, expect, it } from 'vitest';
-import { distanceMatrixKm, isSymmetric, travelMinutesMatrix, validateMatrix } from './travel-matrix';
+import { distanceMatrixKm, isSymmetric, travelMinutesMatrix, validateMatrix } from './travel-matrix.ts';
 
 const points = [
   { lat: 52.52, lon: 13.405 },

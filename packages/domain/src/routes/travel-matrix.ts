@@ -1,6 +1,6 @@
-import { DomainError } from '../errors';
-import { requirePositive } from '../input-checks';
-import { haversineKm, requireGeoPoint, type GeoPoint } from './haversine';
+import { DomainError } from '../errors.ts';
+import { requirePositive } from '../input-checks.ts';
+import { haversineKm, requireGeoPoint, type GeoPoint } from './haversine.ts';
 
 /**
  * Square matrices of distance or travel time between stops, index 0 usually the start. Any source will do (haversine

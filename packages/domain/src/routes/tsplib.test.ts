@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { parseTsplib, tsplibMatrix } from './tsplib';
+import { parseTsplib, tsplibMatrix } from './tsplib.ts';
 
 const berlin52 = readFileSync(new URL('../../test-data/berlin52.tsp', import.meta.url), 'utf8');
 

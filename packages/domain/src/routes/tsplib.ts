@@ -1,4 +1,4 @@
-import { DomainError } from '../errors';
+import { DomainError } from '../errors.ts';
 
 /**
  * TSPLIB instance files (Reinelt, "TSPLIB — A Traveling Salesman Problem Library", ORSA Journal on Computing 3(4),

@@ -1,8 +1,8 @@
-import { DomainError } from '../errors';
-import { requireNonNegative } from '../input-checks';
-import type { DueState } from './due-state';
-import { firstOccurrences, nextOccurrence, type RecurrenceStart } from './recurrence';
-import type { RecurrenceRule } from './recurrence-rule';
+import { DomainError } from '../errors.ts';
+import { requireNonNegative } from '../input-checks.ts';
+import type { DueState } from './due-state.ts';
+import { firstOccurrences, nextOccurrence, type RecurrenceStart } from './recurrence.ts';
+import type { RecurrenceRule } from './recurrence-rule.ts';
 
 /**
  * Calendar-driven work: due at the first occurrence of its rule after it was last done (or at the first occurrence

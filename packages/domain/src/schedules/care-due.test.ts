@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { careDue } from './care-due';
+import { careDue } from './care-due.ts';
 
 const monthly = { rule: 'FREQ=MONTHLY;BYMONTHDAY=1', start: { start: '2024-01-01T08:00', timeZone: 'Europe/Berlin' } };
 

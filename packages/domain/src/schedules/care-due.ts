@@ -1,7 +1,7 @@
-import { DomainError } from '../errors';
-import { calendarDue, type CalendarTrigger } from './calendar-due';
-import { urgency, type DueState } from './due-state';
-import { usageDue, type UsageTrigger } from './usage-due';
+import { DomainError } from '../errors.ts';
+import { calendarDue, type CalendarTrigger } from './calendar-due.ts';
+import { urgency, type DueState } from './due-state.ts';
+import { usageDue, type UsageTrigger } from './usage-due.ts';
 
 /**
  * A care plan's task can be due by calendar, by plays and by power-on hours at once: whichever comes first. The task

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { moreUrgent } from './due-state';
+import { moreUrgent } from './due-state.ts';
 
 describe('moreUrgent', () => {
   it('orders overdue above due-soon above ok', () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { parseRecurrenceRule } from './recurrence-rule';
+import { parseRecurrenceRule } from './recurrence-rule.ts';
 
 describe('parseRecurrenceRule (RFC 5545 §3.3.10 subset)', () => {
   it('reads every supported part', () => {

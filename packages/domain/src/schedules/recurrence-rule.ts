@@ -1,7 +1,7 @@
-import { DomainError } from '../errors';
-import { describe } from '../input-checks';
-import { epochDayFromParts, type EpochDay } from '../plain-date';
-import type { WallTime } from './zoned-time';
+import { DomainError } from '../errors.ts';
+import { describe } from '../input-checks.ts';
+import { epochDayFromParts, type EpochDay } from '../plain-date.ts';
+import type { WallTime } from './zoned-time.ts';
 
 /**
  * The part of RFC 5545 §3.3.10 (RECUR) that care plans need: FREQ=DAILY/WEEKLY/MONTHLY/YEARLY, INTERVAL, BYDAY

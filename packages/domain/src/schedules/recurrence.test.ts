@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { rrulestr } from 'rrule';
 import { describe, expect, it } from 'vitest';
-import { firstOccurrences, iterateOccurrences, nextOccurrence, occurrencesBetween } from './recurrence';
+import { firstOccurrences, iterateOccurrences, nextOccurrence, occurrencesBetween } from './recurrence.ts';
 
 const NY = 'America/New_York';
 
@@ -279,7 +279,7 @@ describe('RFC 5545 §3.8.5.3 examples (DTSTART;TZID=America/New_York; dates from
   });
 });
 
-describe('month ends (RFC 5545 §3.3.10; REFERENCES.md)', () => {
+describe('month ends (RFC 5545 §3.3.10: a date that does not exist, such as 31 April, is ignored, not moved)', () => {
   it('a monthly rule starting on the 31st skips months without a 31st', () => {
     expect(dates('FREQ=MONTHLY', '2024-01-31T09:00', 7, 'Europe/Berlin')).toEqual([
       '2024-01-31',
@@ -398,6 +398,19 @@ describe('agreement with the rrule package (reference implementation)', () => {
       { numRuns: 200 },
     );
   }, 60_000);
+});
+
+describe('the end of the calendar (RFC 5545 §3.3.4 DATE: date-fullyear = 4DIGIT, so 9999-12-31 is the last date)', () => {
+  it('a yearly rule starting in 9998 occurs in 9998 and 9999 only, as the rrule package gives', () => {
+    const got = dates('FREQ=YEARLY', '9998-06-01T09:00', 5, 'UTC');
+    expect(got).toEqual(['9998-06-01', '9999-06-01']);
+    expect(reference('FREQ=YEARLY', '9998-06-01T09:00', 5).map((d) => d.slice(0, 10))).toEqual(got);
+  });
+
+  it('a daily rule stops on 9999-12-31 local, though in New York that evening is already 10000 in UTC', () => {
+    expect(dates('FREQ=DAILY', '9999-12-30T23:30', 5, NY)).toEqual(['9999-12-30', '9999-12-31']);
+    expect(nextOccurrence('FREQ=DAILY', { start: '9999-12-30T09:00', timeZone: 'UTC' }, new Date(Date.UTC(9999, 11, 31, 12)))).toBeNull();
+  });
 });
 
 describe('ranges and bad input', () => {

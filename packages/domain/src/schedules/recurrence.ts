@@ -1,7 +1,7 @@
-import { DomainError } from '../errors';
-import { dateParts, daysInMonth, epochDayFromParts, isoWeekday, type EpochDay } from '../plain-date';
-import { parseRecurrenceRule, validateRecurrenceRule, WEEKDAYS, type RecurrenceRule } from './recurrence-rule';
-import { formatWallTime, instantOf, parseWallTime, requireTimeZone, wallTimeAt, type WallTime } from './zoned-time';
+import { DomainError } from '../errors.ts';
+import { dateParts, daysInMonth, epochDayFromParts, isoWeekday, type EpochDay } from '../plain-date.ts';
+import { parseRecurrenceRule, validateRecurrenceRule, WEEKDAYS, type RecurrenceRule } from './recurrence-rule.ts';
+import { formatWallTime, instantOf, parseWallTime, requireTimeZone, wallTimeAt, type WallTime } from './zoned-time.ts';
 
 /**
  * Occurrences of a recurrence rule from a start in an IANA zone. Each occurrence keeps the start's wall-clock time
@@ -33,6 +33,9 @@ interface Plan {
 
 /** Periods scanned without a single occurrence before deciding the rule can never match again (400 years). */
 const EMPTY_SCAN_YEARS = 400;
+
+/** RFC 5545 §3.3.4 and §3.3.5 give DATE and DATE-TIME a four-digit year: no occurrence can fall after 9999-12-31. */
+const LAST_DAY = epochDayFromParts(9999, 12, 31);
 
 function plan(ruleInput: RecurrenceRule | string, start: RecurrenceStart): Plan {
   const parsed = typeof ruleInput === 'string' ? parseRecurrenceRule(ruleInput) : validateRecurrenceRule(ruleInput);
@@ -166,6 +169,7 @@ export function* iterateOccurrences(ruleInput: RecurrenceRule | string, start: R
     const [first, end] = daysOfPeriod(p, units);
     let found = false;
     for (let day = first; day < end; day++) {
+      if (day > LAST_DAY) return;
       if (day < p.startDay || !matches(p, day)) continue;
       found = true;
       const { year, month, day: dom } = dateParts(day);

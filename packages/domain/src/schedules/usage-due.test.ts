@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { usageDue } from './usage-due';
+import { usageDue } from './usage-due.ts';
 
 describe('usageDue', () => {
   const now = new Date('2024-06-01T00:00:00Z');

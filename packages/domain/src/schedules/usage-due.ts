@@ -1,7 +1,7 @@
-import { DomainError } from '../errors';
-import { requireNonNegative, requirePositive } from '../input-checks';
-import { meterDelta } from '../meters/meter-delta';
-import type { DueState } from './due-state';
+import { DomainError } from '../errors.ts';
+import { requireNonNegative, requirePositive } from '../input-checks.ts';
+import { meterDelta } from '../meters/meter-delta.ts';
+import type { DueState } from './due-state.ts';
 
 /**
  * Usage-driven work: every N plays on the play meter, or every N power-on hours on the hour meter, counted from the

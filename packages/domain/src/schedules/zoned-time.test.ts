@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { formatWallTime, instantOf, offsetAt, parseWallTime, requireTimeZone, wallTimeAt } from './zoned-time';
+import { formatWallTime, instantOf, offsetAt, parseWallTime, requireTimeZone, wallTimeAt } from './zoned-time.ts';
 
 const wall = (text: string) => parseWallTime(text);
 

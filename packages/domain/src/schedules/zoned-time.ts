@@ -1,5 +1,5 @@
-import { DomainError } from '../errors';
-import { describe } from '../input-checks';
+import { DomainError } from '../errors.ts';
+import { describe } from '../input-checks.ts';
 
 /**
  * Wall-clock time in an IANA time zone, through the platform's Intl (the tz database), with the rules of RFC 5545
