@@ -2,6 +2,30 @@
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { mkdirSync, renameSync } from 'node:fs';
+import path from 'node:path';
+import type { Plugin } from 'vite';
+
+// Source maps are made (hidden: no sourceMappingURL in the served files) for reading error reports, then
+// moved out of the served folder, so a production server never hands out the app's source.
+function sourceMapsOutsideServedFolder(): Plugin {
+  let outDir = '';
+  return {
+    name: 'source-maps-outside-served-folder',
+    apply: 'build',
+    configResolved(config) {
+      outDir = path.resolve(config.root, config.build.outDir);
+    },
+    writeBundle(_options, bundle) {
+      const target = path.resolve(outDir, '../sourcemaps');
+      for (const fileName of Object.keys(bundle).filter((f) => f.endsWith('.map'))) {
+        const to = path.join(target, fileName);
+        mkdirSync(path.dirname(to), { recursive: true });
+        renameSync(path.join(outDir, fileName), to);
+      }
+    },
+  };
+}
 
 // The web app's root is the repository root (index.html loads apps/web/src). In development the API
 // runs on API_PORT and Vite proxies /api, /auth and /dev to it so everything stays same-origin.
@@ -9,8 +33,8 @@ const apiPort = Number(process.env.API_PORT ?? 3001);
 const apiTarget = `http://127.0.0.1:${apiPort}`;
 
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
-  build: { outDir: 'dist/web', emptyOutDir: true, sourcemap: true },
+  plugins: [react(), tailwindcss(), sourceMapsOutsideServedFolder()],
+  build: { outDir: 'dist/web', emptyOutDir: true, sourcemap: 'hidden' },
   server: {
     host: '127.0.0.1',
     port: 5173,

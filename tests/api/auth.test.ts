@@ -1,8 +1,9 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { permissions, roles, type Permission, type Role } from '@bumperline/contracts/roles';
+import { sql } from 'drizzle-orm';
 import { memberships } from '@bumperline/db/schema/index';
-import { buildTestApp, JSON_HEADERS, signIn, signedInAgent, type TestApp } from '../support/app.ts';
+import { buildTestApp, JSON_HEADERS, signIn, signInWithLink, signedInAgent, type TestApp } from '../support/app.ts';
 import { createCompany, createUser, TEST_PASSWORD, type CompanyFixture } from '../support/factories.ts';
 
 let t: TestApp;
@@ -22,25 +23,31 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 describe('sign-up and sign-in', () => {
-  it('creates a company and its owner, who can then sign in and see them', async () => {
-    await request(t.app)
+  it('creates a company and its owner, who confirms the address by e-mail and can then sign in and see them', async () => {
+    const res = await request(t.app)
       .post('/api/account/sign-up')
       .set(JSON_HEADERS)
       .send({ companyName: 'Delta Darts', name: 'Dee Owner', email: 'Dee@Delta.test', password: 'a long enough passphrase' })
-      .expect(201);
+      .expect(202);
+    expect(res.body).toEqual({ status: 'check-your-email' });
+    const token = /token=([\w-]+)/.exec(t.mail.lastTo('dee@delta.test')?.text ?? '')?.[1];
+    await request(t.app).post('/api/account/verify-email').set(JSON_HEADERS).send({ token }).expect(204);
     const agent = request.agent(t.app);
     expect(await signIn(agent, 'dee@delta.test', 'a long enough passphrase')).toBe(200);
     const me = await agent.get('/api/account/me').expect(200);
     expect(me.body).toMatchObject({ role: 'owner', company: { name: 'Delta Darts', timeZone: 'America/Chicago', currency: 'USD' } });
   });
 
-  it('refuses a second sign-up with the same e-mail, naming the field', async () => {
+  it('answers a second sign-up with the same e-mail as any other, and mails the address instead', async () => {
     const res = await request(t.app)
       .post('/api/account/sign-up')
       .set(JSON_HEADERS)
       .send({ companyName: 'Again', name: 'X', email: company.ownerEmail, password: 'another passphrase' })
-      .expect(400);
-    expect(res.body.errors).toEqual([{ field: 'email', message: expect.stringMatching(/already/) }]);
+      .expect(202);
+    expect(res.body).toEqual({ status: 'check-your-email' });
+    const notice = t.mail.lastTo(company.ownerEmail);
+    expect(notice?.text).toMatch(/tried to sign up/);
+    expect(await signIn(request.agent(t.app), company.ownerEmail, 'another passphrase')).toBe(401);
   });
 
   it('refuses a wrong password and rate-limits repeated attempts', async () => {
@@ -68,7 +75,9 @@ describe('roles', () => {
     // Each permission has a route that needs it; every role must get 2xx exactly when the table allows.
     const ownerAgent = await signedInAgent(t, people.owner);
     const call = await ownerAgent.post('/api/calls').set(JSON_HEADERS).send({ gameId: company.gameIds[1], problem: 'other' }).expect(201);
-    const probes: Record<Permission, (a: ReturnType<typeof request.agent>) => request.Test> = {
+    // calls:contacts guards no route: it decides whether a call's message recipients show in full
+    // (tests/api/call-contacts.test.ts walks it per role).
+    const probes: Record<Exclude<Permission, 'calls:contacts'>, (a: ReturnType<typeof request.agent>) => request.Test> = {
       'venues:read': (a) => a.get('/api/venues'),
       'venues:write': (a) =>
         a.post('/api/venues').set(JSON_HEADERS).send({ name: 'Probe', addressLine: '1 Probe St', city: 'X', latitude: 1, longitude: 1 }),
@@ -96,7 +105,7 @@ describe('roles', () => {
     };
     for (const role of roles) {
       const agent = await signedInAgent(t, people[role]);
-      for (const [permission, probe] of Object.entries(probes) as [Permission, (typeof probes)[Permission]][]) {
+      for (const [permission, probe] of Object.entries(probes) as [keyof typeof probes, (typeof probes)[keyof typeof probes]][]) {
         const res = await probe(agent);
         const allowed = (permissions[permission] as readonly Role[]).includes(role);
         expect(res.status < 300, `${role} ${permission} → ${res.status}`).toBe(allowed);
@@ -174,7 +183,59 @@ describe('password reset by e-mail', () => {
   });
 });
 
+describe('e-mailed tokens', () => {
+  it('a password reset ends every other link mailed to that person', async () => {
+    const u = await createUser(t.db.owner, { email: 'many-links@gamma.test' });
+    const tokenFor = async (path: string) => {
+      await request(t.app).post(path).set(JSON_HEADERS).send({ email: u.email }).expect(202);
+      return /token=([\w-]+)/.exec(t.mail.lastTo(u.email)?.text ?? '')?.[1];
+    };
+    const signInLink = await tokenFor('/api/account/sign-in-link');
+    const firstReset = await tokenFor('/api/account/password-reset');
+    const secondReset = await tokenFor('/api/account/password-reset');
+    await request(t.app)
+      .post('/api/account/password-reset/confirm')
+      .set(JSON_HEADERS)
+      .send({ token: secondReset, password: 'the newest passphrase' })
+      .expect(204);
+    const stale = await request(t.app)
+      .post('/api/account/password-reset/confirm')
+      .set(JSON_HEADERS)
+      .send({ token: firstReset, password: 'an older reset link' })
+      .expect(400);
+    expect(stale.body.errors[0].field).toBe('token');
+    const link = await signInWithLink(request.agent(t.app), signInLink);
+    expect(link.body.url).toMatch(/error=/);
+    expect(await signIn(request.agent(t.app), u.email, 'the newest passphrase')).toBe(200);
+  });
+});
+
 describe('invitations', () => {
+  it('accepted three times at once joins once; the others get a problem naming the token', async () => {
+    const owner = await signedInAgent(t, company.ownerEmail);
+    await owner.post('/api/team/invitations').set(JSON_HEADERS).send({ email: 'racer@gamma.test', role: 'technician' }).expect(201);
+    const token = /token=([\w-]+)/.exec(t.mail.lastTo('racer@gamma.test')?.text ?? '')?.[1];
+    const accept = () =>
+      request(t.app).post(`/api/invitations/${token}/accept`).set(JSON_HEADERS).send({ name: 'Racer', password: 'racer passphrase' });
+    const results = await Promise.all([accept(), accept(), accept()]);
+    const statuses = results.map((r) => r.status).sort();
+    expect(statuses).toEqual([201, 409, 409]);
+    for (const r of results.filter((x) => x.status === 409)) {
+      expect(r.headers['content-type']).toMatch(/application\/problem\+json/);
+      expect(r.body.errors).toEqual([{ field: 'token', message: expect.any(String) }]);
+    }
+    const users = await t.db.owner.execute(sql`select id from users where lower(email) = 'racer@gamma.test'`);
+    expect(users.rows).toHaveLength(1);
+    const joined = await t.db.owner.execute(
+      sql`select count(*)::int as n from memberships m join users u on u.id = m.user_id where lower(u.email) = 'racer@gamma.test'`,
+    );
+    expect(joined.rows[0]).toEqual({ n: 1 });
+    const audit = await t.db.owner.execute(
+      sql`select count(*)::int as n from audit_log where action = 'join' and entity_id = ${users.rows[0]!.id}`,
+    );
+    expect(audit.rows[0]).toEqual({ n: 1 });
+  });
+
   it('an invited person with no account joins with the role they were invited with', async () => {
     const owner = await signedInAgent(t, company.ownerEmail);
     await owner.post('/api/team/invitations').set(JSON_HEADERS).send({ email: 'newtech@gamma.test', role: 'technician' }).expect(201);
@@ -210,22 +271,11 @@ describe('invitations', () => {
     expect(link.status).toBe(202);
     const token = /token=([\w-]+)/.exec(t.mail.lastTo(people.venue_contact)?.text ?? '')?.[1];
     const agent = request.agent(t.app);
-    const csrf = await agent.get('/auth/csrf');
-    const res = await agent
-      .post('/auth/callback/email-link')
-      .type('form')
-      .set('X-Auth-Return-Redirect', '1')
-      .send({ csrfToken: csrf.body.csrfToken, token });
+    const res = await signInWithLink(agent, token);
     expect(res.body.url).not.toMatch(/error=/);
     const me = await agent.get('/api/account/me').expect(200);
     expect(me.body.role).toBe('venue_contact');
-    const second = request.agent(t.app);
-    const csrf2 = await second.get('/auth/csrf');
-    const replay = await second
-      .post('/auth/callback/email-link')
-      .type('form')
-      .set('X-Auth-Return-Redirect', '1')
-      .send({ csrfToken: csrf2.body.csrfToken, token });
+    const replay = await signInWithLink(request.agent(t.app), token);
     expect(replay.body.url).toMatch(/error=/);
   });
 });

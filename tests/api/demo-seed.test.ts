@@ -49,4 +49,31 @@ describe('demo scenario', () => {
       where d.ended_at is null and g.status <> 'down'`);
     expect(r.rows[0]).toEqual({ n: 0 });
   });
+
+  it('gives each installation its own random game-tag tokens, so none can be worked out from the source', async () => {
+    const other = await freshDatabase();
+    try {
+      await seedDemo(other.owner);
+      const tokens = async (d: TestDatabase) =>
+        new Map(
+          (
+            (await d.owner.execute(sql`select tenant_id || '/' || serial as id, tag_token from games`)).rows as {
+              id: string;
+              tag_token: string;
+            }[]
+          ).map((r) => [r.id, r.tag_token]),
+        );
+      const here = await tokens(db);
+      const there = await tokens(other);
+      expect(here.size).toBe(155);
+      // The same demo games (same company and serial) on two installations share no token.
+      expect([...there.keys()].sort()).toEqual([...here.keys()].sort());
+      const shared = [...here].filter(([id, token]) => there.get(id) === token);
+      expect(there.size).toBe(155);
+      expect(shared).toEqual([]);
+      for (const token of here.values()) expect(token).toMatch(/^[A-Za-z0-9_-]{24}$/);
+    } finally {
+      await other.drop();
+    }
+  });
 });

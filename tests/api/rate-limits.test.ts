@@ -9,6 +9,7 @@ import { createApp } from '@bumperline/api/app';
 import { createMailer } from '@bumperline/api/services/mailer';
 import { SignInLimiter } from '@bumperline/api/auth/sign-in-limiter';
 import { postgresCounter } from '@bumperline/api/http/rate-limit-counter';
+import { runRateLimitCleanupOnce } from '@bumperline/api/jobs/rate-limit-cleanup';
 import { folderPhotoStore } from '@bumperline/api/services/photo-store';
 import { freshDatabase, type TestDatabase } from '../support/database.ts';
 import { createCompany, TEST_PASSWORD } from '../support/factories.ts';
@@ -29,7 +30,7 @@ function instance() {
     appOrigin: 'http://127.0.0.1:3999',
     smsAuthToken: 'test-twilio-auth-token',
     photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
-    signInLimiter: new SignInLimiter(postgresCounter(db.app), 3),
+    signInLimiter: new SignInLimiter(postgresCounter(db.app), { perAccount: 3 }),
   });
 }
 
@@ -48,5 +49,30 @@ describe('sign-in rate limit across API instances', () => {
       expect(r.key).toMatch(/^[0-9a-f]{64}$/);
       expect(r.key).not.toContain(company.ownerEmail);
     }
+  });
+});
+
+describe('expired counters', () => {
+  it('are deleted by the clean-up job, which keeps the ones still counting', async () => {
+    const counter = postgresCounter(db.app);
+    await db.owner.execute(sql`delete from rate_limit_counters`);
+    await counter.hit('cleanup:expired-1', 60_000);
+    await counter.hit('cleanup:expired-2', 60_000);
+    // Their windows have passed.
+    await db.owner.execute(sql`update rate_limit_counters set reset_at = now() - interval '1 second'`);
+    await counter.hit('cleanup:live', 60_000);
+    const before = await db.owner.execute<{ expired: number; live: number }>(
+      sql`select count(*) filter (where reset_at <= now())::int as expired, count(*) filter (where reset_at > now())::int as live from rate_limit_counters`,
+    );
+    expect(before.rows[0]).toEqual({ expired: 2, live: 1 });
+
+    const deleted = await runRateLimitCleanupOnce({ db: db.app });
+    expect(deleted).toBe(2);
+    const after = await db.owner.execute<{ expired: number; live: number }>(
+      sql`select count(*) filter (where reset_at <= now())::int as expired, count(*) filter (where reset_at > now())::int as live from rate_limit_counters`,
+    );
+    expect(after.rows[0]).toEqual({ expired: 0, live: 1 });
+    // The live counter keeps its count.
+    expect((await counter.hit('cleanup:live', 60_000)).hits).toBe(2);
   });
 });

@@ -42,6 +42,8 @@ export default defineConfig({
     stdout: 'ignore',
     stderr: 'pipe',
     env: {
+      // The demo, as `npm start` runs it: fakes for mail and SMS, the demo data, the /dev pages.
+      BUMPERLINE_MODE: 'demo',
       NODE_ENV: 'production',
       PORT: String(port),
       DB_CLUSTER: 'ephemeral',

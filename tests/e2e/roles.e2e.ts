@@ -1,5 +1,5 @@
 // Each role signs in and walks its screens in Chromium; every screen is scanned with axe.
-import { expect, test } from '@playwright/test';
+import { expect, test, type APIRequestContext } from '@playwright/test';
 import { demo, failOnConsoleErrors, scan, signIn } from './fixtures.ts';
 
 test('visitors see the landing page and the sign-in page', async ({ page }) => {
@@ -131,17 +131,53 @@ test('second company sees only its own venues', async ({ page }) => {
   await expect(page.getByRole('link', { name: /Juniper/ })).toHaveCount(0);
 });
 
-test('sign up creates a company and signs its owner in; sign out ends it', async ({ page }) => {
+/** The newest captured e-mail to `address` whose subject matches, and the first link in it (path and query). */
+async function mailedLink(request: APIRequestContext, address: string, subject: RegExp): Promise<string> {
+  const outbox = await (await request.get('/dev/outbox.json')).json();
+  const mail = outbox.messages.find((m: { to: string[]; subject: string }) => m.to.includes(address) && subject.test(m.subject));
+  expect(mail, `an e-mail to ${address} about ${subject}`).toBeTruthy();
+  const link = new URL(/https?:\/\/\S+/.exec(mail.text)![0]);
+  return link.pathname + link.search;
+}
+
+test('sign up: confirm the address by e-mail, then sign in to the new company; sign out ends it', async ({ page, request }) => {
+  const email = 'robin@testflippers.example';
+  const password = 'a much longer passphrase';
   await page.goto('/sign-up');
   await scan(page, 'sign-up');
   await page.getByLabel('Company name').fill('Test Flippers LLC');
   await page.getByLabel('Your name').fill('Robin Test');
-  await page.getByLabel('E-mail').fill('robin@testflippers.example');
+  await page.getByLabel('E-mail').fill(email);
   await page.getByLabel('Password').fill('short');
   await page.getByRole('button', { name: 'Create company' }).click();
   await expect(page.getByText('Must be at least 10 characters')).toBeVisible();
-  await page.getByLabel('Password').fill('a much longer passphrase');
+  await page.getByLabel('Password').fill(password);
   await page.getByRole('button', { name: 'Create company' }).click();
+  await expect(page.getByRole('heading', { name: 'Check your e-mail' })).toBeVisible();
+  await expect(page.getByText(email)).toBeVisible();
+  await scan(page, 'sign-up-check-email');
+
+  // The password does not sign in until the address is confirmed; the sign-in page offers the link again.
+  await page.getByRole('link', { name: 'Go to sign in' }).click();
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page.getByRole('alert')).toContainText('Confirm your e-mail address first');
+  await scan(page, 'sign-in-unconfirmed');
+  await page.getByRole('button', { name: 'Send the link again' }).click();
+  await expect(page.getByRole('status')).toContainText('a new link is on its way');
+  await scan(page, 'sign-in-unconfirmed-resent');
+
+  await page.goto(await mailedLink(request, email, /Confirm/));
+  await expect(page.getByRole('heading', { name: 'Confirm your e-mail address' })).toBeVisible();
+  await scan(page, 'verify-email');
+  await page.getByRole('button', { name: 'Confirm my address' }).click();
+  await expect(page.getByRole('status')).toContainText('address is confirmed');
+  await scan(page, 'verify-email-done');
+  await page.getByRole('link', { name: 'Sign in' }).click();
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
   await expect(page.getByRole('heading', { name: 'Today' })).toBeVisible();
   await expect(page.getByText('Test Flippers LLC')).toBeVisible();
   await page.getByRole('link', { name: 'Venues' }).click();
@@ -153,25 +189,31 @@ test('sign up creates a company and signs its owner in; sign out ends it', async
   await expect(page.getByRole('heading', { name: 'Sign in' })).toBeVisible();
 });
 
-// Uses the company made by the sign-up test, so the demo people keep their passwords for other tests.
-const resetEmail = 'robin@testflippers.example';
 test('password reset by e-mail', async ({ page, request }) => {
+  // Its own person, signed up and confirmed through the API, so it depends on no other test.
+  const email = 'reset.person@resetting.example';
+  const headers = { 'X-Requested-With': 'bumperline' };
+  const signUp = await request.post('/api/account/sign-up', {
+    headers,
+    data: { companyName: 'Resetting Amusements', name: 'Rene Reset', email, password: 'the first passphrase' },
+  });
+  expect(signUp.status()).toBe(202);
+  const confirm = new URL(await mailedLink(request, email, /Confirm/), 'http://x').searchParams.get('token');
+  expect((await request.post('/api/account/verify-email', { headers, data: { token: confirm } })).status()).toBe(204);
+
   await page.goto('/forgot-password');
-  await page.getByLabel('E-mail').fill(resetEmail);
+  await page.getByLabel('E-mail').fill(email);
   await page.getByRole('button', { name: 'Send the link' }).click();
   await expect(page.getByRole('status')).toBeVisible();
-  const outbox = await (await request.get('/dev/outbox.json')).json();
-  const mail = outbox.messages.find((m: { to: string[]; subject: string }) => m.to.includes(resetEmail) && /Reset/.test(m.subject));
-  const link = new URL(/https?:\/\/\S+/.exec(mail.text)![0]);
-  await page.goto(link.pathname + link.search);
-  await page.getByLabel('New password').fill('dispatcher new passphrase');
-  await page.getByLabel('Repeat it').fill('dispatcher new passphrase');
+  await page.goto(await mailedLink(request, email, /Reset/));
+  await page.getByLabel('New password').fill('the second passphrase');
+  await page.getByLabel('Repeat it').fill('the second passphrase');
   await page.getByRole('button', { name: 'Set password' }).click();
   await expect(page.getByRole('status')).toContainText('password is changed');
   await scan(page, 'reset-password-done');
   await page.goto('/sign-in');
-  await page.getByLabel('E-mail').fill(resetEmail);
-  await page.getByLabel('Password').fill('dispatcher new passphrase');
+  await page.getByLabel('E-mail').fill(email);
+  await page.getByLabel('Password').fill('the second passphrase');
   await page.getByRole('button', { name: 'Sign in' }).click();
   await expect(page.getByRole('heading', { name: 'Today' })).toBeVisible();
 });

@@ -9,7 +9,7 @@ import request from 'supertest';
 import type { Express } from 'express';
 import { createApp } from '@bumperline/api/app';
 import { createMailer } from '@bumperline/api/services/mailer';
-import { SignInLimiter } from '@bumperline/api/auth/sign-in-limiter';
+import { SignInLimiter, type SignInLimits } from '@bumperline/api/auth/sign-in-limiter';
 import { postgresCounter } from '@bumperline/api/http/rate-limit-counter';
 import { startMailFake, type MailFake } from '@bumperline/fakes/mail/mail-fake';
 import { startSmsFake, type SmsFake } from '@bumperline/fakes/sms/sms-fake';
@@ -65,7 +65,13 @@ async function startTestSms(): Promise<{ sms: TestSms; server: http.Server }> {
   return { sms: { fake, sender, from: SMS_FROM }, server };
 }
 
-export async function buildTestApp(opts: { signInLimit?: number; sms?: boolean } = {}): Promise<TestApp> {
+/**
+ * `signInLimit`: failed sign-ins per account before its password sign-in pauses (default 50, so suites
+ * that sign in a lot are not slowed); `signInLimits` sets any of the limiter's limits.
+ */
+export async function buildTestApp(
+  opts: { signInLimit?: number; signInLimits?: Partial<SignInLimits>; sms?: boolean } = {},
+): Promise<TestApp> {
   const db = await freshDatabase();
   const mail = await startMailFake();
   const sms = opts.sms ? await startTestSms() : undefined;
@@ -75,11 +81,10 @@ export async function buildTestApp(opts: { signInLimit?: number; sms?: boolean }
     logger: pino({ level: 'silent' }),
     authSecret: 'test-secret-that-is-at-least-32-characters-long',
     smsAuthToken: SMS_AUTH_TOKEN,
-    ...(sms ? { smsFake: sms.sms.fake } : {}),
     photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
     appOrigin: ORIGIN,
-    mailFake: mail,
-    signInLimiter: new SignInLimiter(postgresCounter(db.app), opts.signInLimit ?? 50),
+    devPages: { mail, ...(sms ? { sms: sms.sms.fake } : {}) },
+    signInLimiter: new SignInLimiter(postgresCounter(db.app), { perAccount: opts.signInLimit ?? 50, ...opts.signInLimits }),
   });
   sms?.server.on('request', app);
   return {
@@ -105,14 +110,33 @@ export type Agent = ReturnType<typeof request.agent>;
 
 /** Signs in through Auth.js's own endpoints, exactly as the web app does. Returns the HTTP status. */
 export async function signIn(agent: Agent, email: string, password = TEST_PASSWORD): Promise<number> {
+  return (await signInOutcome(agent, email, password)) === 'ok' ? 200 : 401;
+}
+
+/** Posts an e-mailed sign-in link's token to Auth.js, as the link page does; returns Auth.js's answer. */
+export async function signInWithLink(agent: Agent, token: string | undefined) {
+  const csrf = await agent.get('/auth/csrf').expect(200);
+  return agent
+    .post('/auth/callback/email-link')
+    .type('form')
+    .set('X-Auth-Return-Redirect', '1')
+    .send({ csrfToken: csrf.body.csrfToken, token });
+}
+
+/**
+ * Signs in with a password and says how it went: 'ok', or the code Auth.js puts in the failed sign-in's
+ * url ('credentials' for a wrong e-mail or password; see signInRefusals in the contracts for the others).
+ */
+export async function signInOutcome(agent: Agent, email: string, password = TEST_PASSWORD): Promise<string> {
   const csrf = await agent.get('/auth/csrf').expect(200);
   const res = await agent
     .post('/auth/callback/credentials')
     .type('form')
     .set('X-Auth-Return-Redirect', '1')
     .send({ csrfToken: csrf.body.csrfToken, email, password });
-  // Auth.js answers 200 with a url either way; a failed sign-in's url carries ?error=.
-  return res.status === 200 && !String(res.body.url ?? '').includes('error=') ? 200 : 401;
+  const url = new URL(String(res.body.url ?? ''), ORIGIN);
+  if (res.status === 200 && !url.searchParams.has('error')) return 'ok';
+  return url.searchParams.get('code') ?? url.searchParams.get('error') ?? `status ${res.status}`;
 }
 
 export async function signedInAgent(t: TestApp, email: string, password = TEST_PASSWORD): Promise<Agent> {

@@ -26,6 +26,8 @@ export async function createUser(db: Db, overrides: Partial<typeof users.$inferI
       email: `user-${randomBytes(4).toString('hex')}@example.test`,
       name: 'Test Person',
       passwordHash: await hashPassword(TEST_PASSWORD),
+      // Proven by default; pass `emailVerifiedAt: null` for an address nobody has confirmed.
+      emailVerifiedAt: new Date(),
       ...overrides,
     })
     .returning();

@@ -3,7 +3,6 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import express, { type Express } from 'express';
 import helmet from 'helmet';
-import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import { ExpressAuth } from '@auth/express';
 import type { Db } from '@bumperline/db/client';
@@ -12,8 +11,12 @@ import { InvalidCursorError } from '@bumperline/db/queries/keyset';
 import { buildAuthConfig } from './auth/auth-config.ts';
 import { loadActor } from './auth/load-actor.ts';
 import { SignInLimiter } from './auth/sign-in-limiter.ts';
+import { AccountMailLimiter } from './auth/account-mail-limiter.ts';
 import { postgresCounter } from './http/rate-limit-counter.ts';
 import { csrfGuard } from './http/csrf.ts';
+import { requestLogger } from './http/logger.ts';
+import { loopbackOnly } from './http/loopback-only.ts';
+import { refuseNulBytes } from './http/nul-bytes.ts';
 import { makeScoped } from './http/guards.ts';
 import { notFoundHandler, problemHandler } from './http/problem-details.ts';
 import { ValidationError } from './http/errors.ts';
@@ -41,35 +44,24 @@ export interface AppDeps {
   logger: Logger;
   authSecret: string;
   appOrigin: string;
-  /** Present while fakes stand in for hosted services: mounts the /dev pages. */
-  mailFake?: MailFake;
+  /** Demo mode only: the fakes standing in for the mail server and SMS provider, shown at /dev (loopback only). */
+  devPages?: { mail?: MailFake; sms?: SmsFake };
+  /** Express "trust proxy": which proxies' X-Forwarded-For to believe for the client address (rate limits). */
+  trustProxy?: boolean | number | string;
   /** The built web app (vite build) to serve, in production. */
   webDist?: string;
   signInLimiter?: SignInLimiter;
   photos: PhotoStore;
   /** Twilio auth token: validates the X-Twilio-Signature of inbound webhooks. */
   smsAuthToken: string;
-  /** Present while the SMS fake stands in for Twilio: mounts /dev/phone. */
-  smsFake?: SmsFake;
 }
 
 export function createApp(deps: AppDeps): Express {
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', deps.trustProxy ?? 'loopback');
   app.set('query parser', 'simple');
-  app.use(
-    pinoHttp({
-      logger: deps.logger,
-      genReqId: (req, res) => {
-        const id = (req.headers['x-request-id'] as string | undefined) ?? crypto.randomUUID();
-        res.setHeader('x-request-id', id);
-        return id;
-      },
-      redact: ['req.headers.cookie', 'req.headers.authorization', 'res.headers["set-cookie"]'],
-      autoLogging: { ignore: (req) => req.url === '/api/health' },
-    }),
-  );
+  app.use(requestLogger(deps.logger));
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -82,11 +74,12 @@ export function createApp(deps: AppDeps): Express {
     }),
   );
 
+  const signInLimiter = deps.signInLimiter ?? new SignInLimiter(postgresCounter(deps.db));
   const authConfig = buildAuthConfig({
     db: deps.db,
     secret: deps.authSecret,
     secureCookies: deps.appOrigin.startsWith('https:'),
-    limiter: deps.signInLimiter ?? new SignInLimiter(postgresCounter(deps.db)),
+    limiter: signInLimiter,
   });
   // Auth.js reads the client address from this header for rate limiting; never trust the client's own.
   app.use('/auth', (req, _res, next) => {
@@ -101,13 +94,23 @@ export function createApp(deps: AppDeps): Express {
   app.use(publicTagsRouter({ db: deps.db, photos: deps.photos, appOrigin: deps.appOrigin }));
 
   app.use(express.json({ limit: '100kb' }));
+  app.use(refuseNulBytes);
   app.use(loadActor(deps.db, authConfig));
 
   const scoped = makeScoped(deps.db);
   const api = express.Router();
   api.use('/health', healthRouter(deps.db));
   api.use(csrfGuard(deps.appOrigin));
-  api.use('/account', accountRouter({ db: deps.db, mailer: deps.mailer, appOrigin: deps.appOrigin }));
+  api.use(
+    '/account',
+    accountRouter({
+      db: deps.db,
+      mailer: deps.mailer,
+      appOrigin: deps.appOrigin,
+      signInLimiter,
+      mailLimiter: new AccountMailLimiter(postgresCounter(deps.db)),
+    }),
+  );
   api.use('/invitations', invitationsRouter(deps.db));
   api.use('/company', companyRouter(scoped));
   api.use('/activity', activityRouter(scoped));
@@ -123,14 +126,15 @@ export function createApp(deps: AppDeps): Express {
   api.use(notFoundHandler);
   app.use('/api', api);
 
-  if (deps.mailFake) app.use('/dev', devRouter(deps.mailFake));
-  if (deps.smsFake) app.use('/dev', devPhoneRouter(deps.smsFake));
+  if (deps.devPages?.mail) app.use('/dev', loopbackOnly, devRouter(deps.devPages.mail));
+  if (deps.devPages?.sms) app.use('/dev', loopbackOnly, devPhoneRouter(deps.devPages.sms));
 
   if (deps.webDist && existsSync(path.join(deps.webDist, 'index.html'))) {
     const index = path.join(deps.webDist, 'index.html');
     app.use(express.static(deps.webDist, { index: false, maxAge: '1h' }));
-    // Client-side routes: every other GET gets the app shell.
-    app.get('/{*path}', (_req, res) => res.sendFile(index));
+    // Client-side routes: every other GET gets the app shell — but a missing file under /assets (a source
+    // map, an old bundle) is a 404, not a page, and so is /dev/… wherever the demo's pages are not mounted.
+    app.get('/{*path}', (req, res, next) => (/^\/(assets|dev)\//.test(req.path) ? next() : res.sendFile(index)));
   }
 
   app.use(notFoundHandler);

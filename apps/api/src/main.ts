@@ -1,56 +1,77 @@
-// Starts Bumperline: the database (a private cluster unless DATABASE_URL is set), the mail fake
-// (unless SMTP_URL is set), the demo data, then the API serving the built web app on one port.
+// Starts Bumperline in one of two modes (env.ts):
+// - demo: a private PostgreSQL cluster unless DATABASE_URL is set, local fakes for mail and SMS, the
+//   fictional demo data and the /dev pages (loopback only) — what the README's `npm start` runs;
+// - production: real providers from settings, no fakes, no demo data; refuses to start without them.
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
-import pino from 'pino';
 import { startCluster, type Cluster } from '@bumperline/db/lifecycle/cluster';
 import { provisionDatabase } from '@bumperline/db/lifecycle/provision';
 import { createDb } from '@bumperline/db/client';
 import { seedDemo } from '@bumperline/db/demo/seed';
-import { startMailFake } from '@bumperline/fakes/mail/mail-fake';
+import { startMailFake, type MailFake } from '@bumperline/fakes/mail/mail-fake';
+import { startSmsFake, type SmsFake } from '@bumperline/fakes/sms/sms-fake';
 import { createApp } from './app.ts';
-import { readEnv } from './env.ts';
+import { MissingSettingsError, readEnv, type Env } from './env.ts';
+import { createLogger } from './http/logger.ts';
 import { createMailer } from './services/mailer.ts';
 import { folderPhotoStore } from './services/photo-store.ts';
-import { startSmsFake } from '@bumperline/fakes/sms/sms-fake';
 import { createSmsSender } from './services/sms.ts';
 import { startJobs } from './jobs/scheduler.ts';
+import { installationSecrets } from './startup/installation-secrets.ts';
 
-const env = readEnv();
-const logger = pino({ level: env.LOG_LEVEL, redact: ['password', '*.password'] });
+let env: Env;
+try {
+  env = readEnv();
+} catch (err) {
+  if (!(err instanceof MissingSettingsError)) throw err;
+  console.error(err.message);
+  process.exit(1);
+}
+const logger = createLogger({ level: env.LOG_LEVEL, production: env.NODE_ENV === 'production' });
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
+const dataDir = path.join(repoRoot, '.data');
+const demo = env.mode === 'demo';
 
 let cluster: Cluster | undefined;
 const adminUrl = env.DATABASE_URL ?? (cluster = await startCluster({ mode: env.DB_CLUSTER, log: (m) => logger.info(m) })).adminUrl;
 const urls = await provisionDatabase(adminUrl, env.DATABASE_NAME);
 logger.info(`database "${urls.database}" migrated`);
 
-if (env.SEED_DEMO === 'true') {
+if (demo) {
   const ownerDb = createDb(urls.ownerUrl, { max: 2 });
   const seeded = await seedDemo(ownerDb);
   logger.info(seeded ? 'demo data seeded' : 'demo data already present');
   await ownerDb.$client.end();
 }
 
-const mailFake = env.fakesOn ? await startMailFake() : undefined;
-const mailer = createMailer({ smtpUrl: env.SMTP_URL, fakePort: mailFake?.port, from: env.MAIL_FROM });
-// SMS: the real Twilio service when credentials are set, else the local fake (same SDK either way).
-const smsAuthToken = env.TWILIO_AUTH_TOKEN ?? 'fake-twilio-auth-token-for-local-use';
-const smsAccountSid = env.TWILIO_ACCOUNT_SID ?? 'ACfakefakefakefakefakefakefakefake0';
-const smsFake = env.TWILIO_AUTH_TOKEN
-  ? undefined
-  : await startSmsFake({
-      authToken: smsAuthToken,
-      accountSid: smsAccountSid,
-      webhookUrl: `${env.appOrigin}/webhooks/sms/inbound`,
-      statusCallbackUrl: `${env.appOrigin}/webhooks/sms/status`,
-      // Webhooks are signed for the public address but delivered straight to this process (no dev proxy in between).
-      deliverTo: `http://${env.HOST}:${env.PORT}`,
-    });
-const sms = createSmsSender({
-  accountSid: smsAccountSid,
-  authToken: smsAuthToken,
-  from: env.TWILIO_FROM,
+// Demo: secrets made for this installation, and the fakes that stand in for the mail server and SMS provider.
+const secrets = env.mode === 'demo' ? installationSecrets(dataDir) : undefined;
+const authSecret = env.mode === 'demo' ? (env.authSecret ?? secrets!.authSecret) : env.authSecret;
+const sms =
+  env.mode === 'demo'
+    ? { accountSid: 'AC' + secrets!.smsAuthToken.slice(0, 32), authToken: secrets!.smsAuthToken, from: '+13125550199' }
+    : env.twilio;
+let mailFake: MailFake | undefined;
+let smsFake: SmsFake | undefined;
+if (demo) {
+  mailFake = await startMailFake();
+  smsFake = await startSmsFake({
+    authToken: sms.authToken,
+    accountSid: sms.accountSid,
+    number: sms.from,
+    webhookUrl: `${env.appOrigin}/webhooks/sms/inbound`,
+    statusCallbackUrl: `${env.appOrigin}/webhooks/sms/status`,
+    // Webhooks are signed for the public address but delivered straight to this process (no dev proxy in between).
+    deliverTo: `http://${env.HOST}:${env.PORT}`,
+  });
+}
+const mailer = createMailer({
+  smtpUrl: env.mode === 'production' ? env.smtpUrl : undefined,
+  fakePort: mailFake?.port,
+  from: env.MAIL_FROM,
+});
+const smsSender = createSmsSender({
+  ...sms,
   fakeUrl: smsFake?.url,
   statusCallbackUrl: `${env.appOrigin}/webhooks/sms/status`,
 });
@@ -59,18 +80,33 @@ const app = createApp({
   db,
   mailer,
   logger,
-  authSecret: env.authSecret,
+  authSecret,
   appOrigin: env.appOrigin,
-  mailFake,
+  trustProxy: env.TRUST_PROXY,
   webDist: path.join(repoRoot, 'dist/web'),
-  smsAuthToken,
-  smsFake,
-  photos: folderPhotoStore(env.UPLOADS_DIR ?? path.join(repoRoot, '.data/uploads')),
+  smsAuthToken: sms.authToken,
+  ...(mailFake && smsFake ? { devPages: { mail: mailFake, sms: smsFake } } : {}),
+  photos: folderPhotoStore(env.UPLOADS_DIR ?? path.join(dataDir, 'uploads')),
 });
 
-const jobs = startJobs({ db, sms, mailer, logger, appOrigin: env.appOrigin });
+const jobs = startJobs({ db, sms: smsSender, mailer, logger, appOrigin: env.appOrigin });
 const server = app.listen(env.PORT, env.HOST, () => {
-  logger.info(`Bumperline is running at http://${env.HOST}:${env.PORT}${mailFake ? ` (captured e-mail at /dev/outbox)` : ''}`);
+  const at = `http://${env.HOST}:${env.PORT}`;
+  if (demo) {
+    console.log(
+      [
+        '',
+        '  Bumperline — DEMO MODE',
+        `  ${at}`,
+        '  Fictional demo data (sign-ins in the README). E-mail and SMS go to local fakes, never out:',
+        `  captured e-mail at ${at}/dev/outbox, texts at ${at}/dev/phone (answering this machine only).`,
+        '  Not for real use: see "Running in production" in the README.',
+        '',
+      ].join('\n'),
+    );
+  } else {
+    logger.info(`Bumperline is running at ${at} (public origin ${env.appOrigin})`);
+  }
 });
 
 let stopping = false;

@@ -46,7 +46,22 @@ export const companyUpdate = z.strictObject({
 });
 
 export const passwordResetRequest = z.strictObject({ email });
-export const passwordResetConfirm = z.strictObject({ token: z.string().min(20).max(200), password });
+const emailedToken = z.string().min(20, { error: 'is not a link we sent' }).max(200, { error: 'is not a link we sent' });
+export const passwordResetConfirm = z.strictObject({ token: emailedToken, password });
+/** Opening the link that confirms a new sign-up's address. */
+export const verifyEmailInput = z.strictObject({ token: emailedToken });
+
+/** What sign-up answers, whether or not the address already has an account. */
+export const signUpAnswer = { status: 'check-your-email' } as const;
+
+/**
+ * Why a password sign-in was refused, beyond a wrong e-mail or password (Auth.js's `credentials`); the
+ * code comes back in the failed sign-in's url. `unverified` is only said to someone who gave the right
+ * password; the other two depend on counts kept per e-mail and per network address, never on whether
+ * the account exists.
+ */
+export const signInRefusals = ['unverified', 'account-paused', 'too-many-attempts'] as const;
+export type SignInRefusal = (typeof signInRefusals)[number];
 
 export const invitationInput = z.strictObject({ email, role: z.enum(roles) });
 export type InvitationInput = z.input<typeof invitationInput>;

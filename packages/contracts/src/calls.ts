@@ -1,6 +1,6 @@
 // Service calls: the shared words, the state machine and the request shapes.
 import { z } from 'zod';
-import { listQueryBase, shortText, uuid } from './common.ts';
+import { listQueryBase, rowVersion, shortText, uuid } from './common.ts';
 import { phoneNumber } from './phone.ts';
 
 export const problemKinds = ['dead', 'no_credit', 'ball_stuck', 'no_sound', 'display_out', 'other'] as const;
@@ -99,14 +99,14 @@ export type OpenCallInput = z.input<typeof openCallInput>;
 
 export const transitionInput = z.strictObject({
   to: z.enum(callStates),
-  version: z.number().int().min(1),
+  version: rowVersion,
   note: shortText(2000).optional(),
 });
 export const assignInput = z.strictObject({
   technicianId: uuid.nullable(),
-  version: z.number().int().min(1),
+  version: rowVersion,
 });
-export const severityInput = z.strictObject({ severity: z.enum(severities), version: z.number().int().min(1) });
+export const severityInput = z.strictObject({ severity: z.enum(severities), version: rowVersion });
 export const noteInput = z.strictObject({ note: shortText(2000).min(1, { error: 'is required' }) });
 
 export const callListQuery = listQueryBase.extend({

@@ -5,8 +5,21 @@ export const shortText = (max = 200) =>
   z
     .string()
     .trim()
-    .max(max, { error: `must be at most ${max} characters` });
+    .max(max, { error: `must be at most ${max} characters` })
+    // PostgreSQL text cannot hold NUL: refuse it here, beside the field, rather than fail in the database.
+    .refine((s) => !s.includes('\u0000'), { error: 'must not contain a NUL character' });
 export const requiredText = (max = 200) => shortText(max).min(1, { error: 'is required' });
+
+/** PostgreSQL `integer` (int4): integer fields stay inside it, so a huge number is a 400, not a database error. */
+export const INT4_MAX = 2_147_483_647;
+export const int4 = () =>
+  z
+    .number({ error: 'must be a number' })
+    .int({ error: 'must be a whole number' })
+    .max(INT4_MAX, { error: `must be at most ${INT4_MAX}` });
+
+/** The version an edit started from (optimistic concurrency). */
+export const rowVersion = int4().min(1, { error: 'must be at least 1' });
 
 /** RFC 9457 problem details, with our field-level errors. */
 export interface ProblemDetails {

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { listQueryBase, requiredText, shortText, uuid } from './common.ts';
+import { listQueryBase, requiredText, rowVersion, shortText, uuid } from './common.ts';
 
 export const gameKinds = ['pinball', 'video', 'jukebox', 'darts', 'other'] as const;
 export const gameKindLabels: Record<(typeof gameKinds)[number], string> = {
@@ -48,7 +48,7 @@ export const gameInput = z.strictObject({
 });
 export type GameInput = z.input<typeof gameInput>;
 
-export const gameUpdate = gameInput.partial().extend({ version: z.number().int().min(1) });
+export const gameUpdate = gameInput.partial().extend({ version: rowVersion });
 export type GameUpdate = z.input<typeof gameUpdate>;
 
 export const gameSort = z.enum(['title', 'serial', 'status', 'venue', 'createdAt']);

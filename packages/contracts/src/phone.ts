@@ -14,3 +14,14 @@ export const phoneNumber = z
     }
     return parsed.number;
   });
+
+/**
+ * A phone number or e-mail address for someone who may see that a message went out but not whom to
+ * reach: the last two digits of a number, the first letter and domain of an address.
+ */
+export function maskAddress(address: string): string {
+  const at = address.indexOf('@');
+  if (at > 0) return `${address[0]}•••${address.slice(at)}`;
+  const digits = address.replace(/\D/g, '');
+  return `•••• ${digits.slice(-2)}`;
+}

@@ -24,6 +24,8 @@ export const permissions = {
   'calls:open': ['owner', 'dispatcher', 'technician'],
   'calls:dispatch': ['owner', 'dispatcher'],
   'calls:work': ['owner', 'dispatcher', 'technician'],
+  /** Whom the call's messages went to (a reporter's phone, a venue's e-mail) in full; others see them masked. */
+  'calls:contacts': ['owner', 'dispatcher'],
   'settings:manage': ['owner'],
   'venue-view': ['venue_contact'],
 } as const satisfies Record<string, readonly Role[]>;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { listQueryBase, requiredText, shortText } from './common.ts';
+import { listQueryBase, requiredText, rowVersion, shortText } from './common.ts';
 
 const hhmm = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, { error: 'must be a time as HH:MM' });
 const dayHours = z.array(z.strictObject({ open: hhmm, close: hhmm })).max(4);
@@ -34,7 +34,7 @@ export const venueInput = z.strictObject({
 export type VenueInput = z.input<typeof venueInput>;
 
 /** An edit names the version it started from, so two people editing at once cannot overwrite each other. */
-export const venueUpdate = venueInput.partial().extend({ version: z.number().int().min(1) });
+export const venueUpdate = venueInput.partial().extend({ version: rowVersion });
 export type VenueUpdate = z.input<typeof venueUpdate>;
 
 export const venueSort = z.enum(['name', 'city', 'createdAt']);

@@ -5,11 +5,12 @@ import type { ExpressAuthConfig } from '@auth/express';
 import Credentials from '@auth/express/providers/credentials';
 import { eq } from 'drizzle-orm';
 import type { Db } from '@bumperline/db/client';
-import { createSession, findUserByEmail, revokeSession } from '@bumperline/db/queries/identity';
-import { verifyPassword } from '@bumperline/db/passwords';
+import { createSession, revokeSession } from '@bumperline/db/queries/identity';
 import { users } from '@bumperline/db/schema/index';
 import { consumeEmailToken } from '@bumperline/db/queries/email-tokens';
+import { recordEmailProof } from '@bumperline/db/queries/email-proof';
 import type { SignInLimiter } from './sign-in-limiter.ts';
+import { passwordSignIn } from './password-sign-in.ts';
 
 export function buildAuthConfig(opts: { db: Db; secret: string; secureCookies: boolean; limiter: SignInLimiter }): ExpressAuthConfig {
   const { db, limiter } = opts;
@@ -25,29 +26,36 @@ export function buildAuthConfig(opts: { db: Db; secret: string; secureCookies: b
       Credentials({
         id: 'credentials',
         credentials: { email: {}, password: {} },
-        async authorize(raw, request) {
-          const email = typeof raw.email === 'string' ? raw.email.trim().toLowerCase() : '';
-          const password = typeof raw.password === 'string' ? raw.password : '';
-          const ip = request.headers.get('x-bumperline-client-ip') ?? 'unknown';
-          if (!email || !password || !(await limiter.allow(email, ip))) return null;
-          const user = await findUserByEmail(db, email);
-          const ok = await verifyPassword(user?.passwordHash, password);
-          if (!user || !ok) return null;
-          await limiter.reset(email, ip);
-          return { id: user.id, email: user.email, name: user.name };
+        authorize(raw, request) {
+          return passwordSignIn(
+            { db, limiter },
+            {
+              email: typeof raw.email === 'string' ? raw.email.trim().toLowerCase() : '',
+              password: typeof raw.password === 'string' ? raw.password : '',
+              ip: request.headers.get('x-bumperline-client-ip') ?? 'unknown',
+            },
+          );
         },
       }),
-      // Venue contacts sign in by a one-time link e-mailed to them; the link page posts its token here.
+      // A one-time link e-mailed to the person (venue contacts always sign in so; anyone else may, and
+      // must while their password sign-in is paused); the link page posts its token here.
       Credentials({
         id: 'email-link',
         credentials: { token: {} },
         async authorize(raw) {
           const token = typeof raw.token === 'string' ? raw.token : '';
           if (token.length < 20) return null;
-          const userId = await consumeEmailToken(db, token, 'sign-in');
-          if (!userId) return null;
-          const [user] = await db.select().from(users).where(eq(users.id, userId));
-          return user ? { id: user.id, email: user.email, name: user.name } : null;
+          const user = await db.transaction(async (tx) => {
+            const userId = await consumeEmailToken(tx, token, 'sign-in');
+            if (!userId) return undefined;
+            // The first proof of the address drops a password chosen before it (see email-proof.ts).
+            await recordEmailProof(tx, userId, { keepPassword: false });
+            const [u] = await tx.select().from(users).where(eq(users.id, userId));
+            return u;
+          });
+          if (!user) return null;
+          await limiter.addressProven(user.email);
+          return { id: user.id, email: user.email, name: user.name };
         },
       }),
     ],

@@ -29,13 +29,16 @@ export function requirePermission(req: Request, permission: Permission): TenantA
   return actor as TenantActor;
 }
 
+/** A route handler built by `scoped`, carrying the permission it checks (read by the permissions test). */
+export type GuardedHandler = RequestHandler & { permission: Permission };
+
 /**
  * A handler that needs `permission` in the current company. Whatever it returns is sent as JSON
  * (with `status`), after its transaction has committed.
  */
 export function makeScoped(db: Db) {
-  return function scoped<T>(permission: Permission, handler: (ctx: ScopedContext) => Promise<T>, status = 200): RequestHandler {
-    return async (req, res) => {
+  return function scoped<T>(permission: Permission, handler: (ctx: ScopedContext) => Promise<T>, status = 200): GuardedHandler {
+    const guarded: RequestHandler = async (req, res) => {
       const actor = requirePermission(req, permission);
       const later: (() => Promise<void>)[] = [];
       const result = await withScope(db, { tenantId: actor.tenantId, userId: actor.userId }, (tx) =>
@@ -47,5 +50,6 @@ export function makeScoped(db: Db) {
         else res.status(status).json(result);
       }
     };
+    return Object.assign(guarded, { permission });
   };
 }

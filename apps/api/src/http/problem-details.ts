@@ -1,6 +1,7 @@
 // The one error handler: every failure leaves as application/problem+json (RFC 9457).
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { ProblemDetails } from '@bumperline/contracts/common';
+import { redactUrl } from './logger.ts';
 import { ConflictError, HttpError, NotFoundError, ServiceUnavailableError } from './errors.ts';
 
 export function sendProblem(res: Parameters<RequestHandler>[1], problem: ProblemDetails & Record<string, unknown>) {
@@ -50,7 +51,8 @@ export const problemHandler: ErrorRequestHandler = (err, req, res, _next) => {
     title: e.title,
     status: e.status,
     ...(e.detail ? { detail: e.detail } : {}),
-    instance: req.originalUrl,
+    // The path without its tokens: a problem body gets pasted into support tickets.
+    instance: redactUrl(req.originalUrl),
     ...(e.errors ? { errors: e.errors } : {}),
     ...(e instanceof ConflictError && e.current !== undefined ? { current: e.current } : {}),
   };

@@ -1,6 +1,6 @@
 // The scheduled jobs (node-cron): the outbox worker every 10 seconds, response-target warnings every
-// minute. Each run first takes a PostgreSQL advisory lock, so with several API instances one runs and
-// the others skip that tick.
+// minute, expired rate-limit counters cleared every 10 minutes. Each run first takes a PostgreSQL
+// advisory lock, so with several API instances one runs and the others skip that tick.
 import cron, { type ScheduledTask } from 'node-cron';
 import { sql } from 'drizzle-orm';
 import type { Db } from '@bumperline/db/client';
@@ -9,6 +9,7 @@ import type { Mailer } from '../services/mailer.ts';
 import type { SmsSender } from '../services/sms.ts';
 import { runOutboxOnce } from './outbox-worker.ts';
 import { runTargetWarningsOnce } from './target-warnings.ts';
+import { runRateLimitCleanupOnce } from './rate-limit-cleanup.ts';
 
 export interface JobDeps {
   db: Db;
@@ -17,13 +18,14 @@ export interface JobDeps {
   logger: Logger;
   appOrigin: string;
   /** Cron expressions (seconds first) overriding the defaults, for tests. */
-  schedules?: { outbox?: string; targetWarnings?: string };
+  schedules?: { outbox?: string; targetWarnings?: string; rateLimitCleanup?: string };
 }
 
 /** One advisory-lock key per job (any constant bigint; "BL" in the high bytes keeps them recognisable). */
 export const JOB_LOCKS = {
   outbox: 0x424c_0001,
   targetWarnings: 0x424c_0002,
+  rateLimitCleanup: 0x424c_0003,
 } as const;
 
 /**
@@ -66,6 +68,11 @@ export function startJobs(deps: JobDeps): { stop(): void } {
       deps.schedules?.targetWarnings ?? '0 * * * * *',
       step('targetWarnings', () => runTargetWarningsOnce({ db, appOrigin: deps.appOrigin, logger })),
       { name: 'target-warnings', noOverlap: true },
+    ),
+    cron.schedule(
+      deps.schedules?.rateLimitCleanup ?? '30 */10 * * * *',
+      step('rateLimitCleanup', () => runRateLimitCleanupOnce({ db })),
+      { name: 'rate-limit-cleanup', noOverlap: true },
     ),
   ];
   return {

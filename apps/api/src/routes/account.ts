@@ -1,41 +1,102 @@
-// Sign-up, who am I, company switching, password reset and e-mailed sign-in links.
-// Signing in and out themselves are Auth.js's (/auth/...).
+// Sign-up (with the e-mail confirming its address), who am I, company switching, password reset and
+// e-mailed sign-in links. Signing in and out themselves are Auth.js's (/auth/...).
+// The forms anyone can use without signing in answer the same whether or not the address has an
+// account, and their e-mails are capped per address (AccountMailLimiter).
 import { randomUUID } from 'node:crypto';
 import { Router } from 'express';
 import { eq } from 'drizzle-orm';
-import { passwordResetConfirm, passwordResetRequest, signUpInput, switchCompanyInput, type Me } from '@bumperline/contracts/auth';
+import {
+  passwordResetConfirm,
+  passwordResetRequest,
+  signUpAnswer,
+  signUpInput,
+  switchCompanyInput,
+  verifyEmailInput,
+  type Me,
+} from '@bumperline/contracts/auth';
 import { withScope, type Db } from '@bumperline/db/client';
 import { memberships, tenants, users } from '@bumperline/db/schema/index';
 import { findUserByEmail, listCompaniesOf, revokeAllSessionsOf, setActiveCompany } from '@bumperline/db/queries/identity';
+import { recordEmailProof } from '@bumperline/db/queries/email-proof';
 import { hashPassword } from '@bumperline/db/passwords';
 import { ValidationError } from '../http/errors.ts';
 import { requireActor } from '../http/guards.ts';
 import { parse } from '../http/validate.ts';
-import { consumeEmailToken, issueEmailToken } from '@bumperline/db/queries/email-tokens';
+import { consumeEmailToken, endEmailTokensOf, issueEmailToken } from '@bumperline/db/queries/email-tokens';
 import type { Mailer } from '../services/mailer.ts';
-import { appLink } from '../services/links.ts';
+import { confirmAddressMail, passwordResetMail, signInLinkMail, signUpWithTakenAddressMail } from '../services/account-mail.ts';
+import type { SignInLimiter } from '../auth/sign-in-limiter.ts';
+import type { AccountMailLimiter } from '../auth/account-mail-limiter.ts';
 
 const RESET_TTL_MS = 60 * 60_000;
 const LINK_TTL_MS = 20 * 60_000;
+const CONFIRM_TTL_MS = 24 * 3600_000;
+const sentIfKnown = { status: 'sent-if-known' } as const;
 
-export function accountRouter(deps: { db: Db; mailer: Mailer; appOrigin: string }): Router {
-  const { db, mailer, appOrigin } = deps;
+export function accountRouter(deps: {
+  db: Db;
+  mailer: Mailer;
+  appOrigin: string;
+  signInLimiter: SignInLimiter;
+  mailLimiter: AccountMailLimiter;
+}): Router {
+  const { db, mailer, appOrigin, signInLimiter, mailLimiter } = deps;
   const r = Router();
 
+  // A new address gets its company and a confirmation link; an address that has an account gets a
+  // notice instead. Both answer 202 "check your e-mail", after the same work (the hash included).
   r.post('/sign-up', async (req, res) => {
     const input = parse(signUpInput, req.body);
-    if (await findUserByEmail(db, input.email)) {
-      throw new ValidationError([{ field: 'email', message: 'already has an account: sign in instead' }]);
-    }
-    const tenantId = randomUUID();
     const passwordHash = await hashPassword(input.password);
+    const tenantId = randomUUID();
     const userId = await withScope(db, { tenantId }, async (tx) => {
-      const [user] = await tx.insert(users).values({ email: input.email, name: input.name, passwordHash }).returning();
+      const [user] = await tx
+        .insert(users)
+        .values({ email: input.email, name: input.name, passwordHash })
+        .onConflictDoNothing()
+        .returning({ id: users.id });
+      if (!user) return undefined;
       await tx.insert(tenants).values({ id: tenantId, name: input.companyName, timeZone: input.timeZone, currency: input.currency });
-      await tx.insert(memberships).values({ tenantId, userId: user!.id, role: 'owner' });
-      return user!.id;
+      await tx.insert(memberships).values({ tenantId, userId: user.id, role: 'owner' });
+      return user.id;
     });
-    res.status(201).json({ userId, companyId: tenantId });
+    if (await mailLimiter.allow('sign-up', input.email)) {
+      if (userId) {
+        const token = await issueEmailToken(db, userId, 'verify-email', CONFIRM_TTL_MS);
+        await mailer.send(confirmAddressMail(input.email, appOrigin, token));
+      } else {
+        await mailer.send(signUpWithTakenAddressMail(input.email, appOrigin));
+      }
+    }
+    res.status(202).json(signUpAnswer);
+  });
+
+  // The link in the confirmation e-mail: the sign-up's password is kept, since this link vouches for it.
+  r.post('/verify-email', async (req, res) => {
+    const { token } = parse(verifyEmailInput, req.body);
+    const email = await db.transaction(async (tx) => {
+      const userId = await consumeEmailToken(tx, token, 'verify-email');
+      if (!userId) return undefined;
+      await recordEmailProof(tx, userId, { keepPassword: true });
+      const [u] = await tx.select({ email: users.email }).from(users).where(eq(users.id, userId));
+      return u?.email;
+    });
+    if (!email) throw new ValidationError([{ field: 'token', message: 'is invalid, used or expired: ask for a new link' }]);
+    await signInLimiter.addressProven(email);
+    res.status(204).end();
+  });
+
+  // Another confirmation link, for an address not yet confirmed. Always 202.
+  r.post('/verify-email/resend', async (req, res) => {
+    const { email } = parse(passwordResetRequest, req.body);
+    if (await mailLimiter.allow('sign-up', email)) {
+      const user = await findUserByEmail(db, email);
+      if (user && !user.emailVerifiedAt) {
+        const token = await issueEmailToken(db, user.id, 'verify-email', CONFIRM_TTL_MS);
+        await mailer.send(confirmAddressMail(user.email, appOrigin, token));
+      }
+    }
+    res.status(202).json(sentIfKnown);
   });
 
   r.get('/me', async (req, res) => {
@@ -74,48 +135,46 @@ export function accountRouter(deps: { db: Db; mailer: Mailer; appOrigin: string 
   // Always 202, whether or not the address has an account, so the form reveals nothing.
   r.post('/password-reset', async (req, res) => {
     const { email } = parse(passwordResetRequest, req.body);
-    const user = await findUserByEmail(db, email);
-    if (user) {
-      const token = await issueEmailToken(db, user.id, 'password-reset', RESET_TTL_MS);
-      const link = appLink(appOrigin, `/reset-password?token=${token}`);
-      await mailer.send({
-        to: user.email,
-        subject: 'Reset your Bumperline password',
-        text: `Someone asked to reset the password for ${user.email}.\n\nChoose a new password here (valid for one hour):\n${link}\n\nIf it was not you, ignore this message.`,
-      });
+    if (await mailLimiter.allow('password-reset', email)) {
+      const user = await findUserByEmail(db, email);
+      if (user) {
+        const token = await issueEmailToken(db, user.id, 'password-reset', RESET_TTL_MS);
+        await mailer.send(passwordResetMail(user.email, appOrigin, token));
+      }
     }
-    res.status(202).json({ status: 'sent-if-known' });
+    res.status(202).json(sentIfKnown);
   });
 
   r.post('/password-reset/confirm', async (req, res) => {
     const { token, password } = parse(passwordResetConfirm, req.body);
     const passwordHash = await hashPassword(password);
-    const userId = await db.transaction(async (tx) => {
+    const user = await db.transaction(async (tx) => {
       const usedBy = await consumeEmailToken(tx, token, 'password-reset');
       if (!usedBy) return undefined;
-      await tx.update(users).set({ passwordHash }).where(eq(users.id, usedBy));
-      return usedBy;
+      const [u] = await tx.update(users).set({ passwordHash }).where(eq(users.id, usedBy)).returning({ id: users.id, email: users.email });
+      // The link proves the address; the password was chosen through it, so it is kept.
+      await recordEmailProof(tx, usedBy, { keepPassword: true });
+      // Whoever had an older link, or a session, had it under the old password: all of them end.
+      await endEmailTokensOf(tx, usedBy);
+      await revokeAllSessionsOf(tx, usedBy);
+      return u;
     });
-    if (!userId) throw new ValidationError([{ field: 'token', message: 'is invalid, used or expired: ask for a new link' }]);
-    // A new password signs the person out everywhere.
-    await revokeAllSessionsOf(db, userId);
+    if (!user) throw new ValidationError([{ field: 'token', message: 'is invalid, used or expired: ask for a new link' }]);
+    await signInLimiter.addressProven(user.email);
     res.status(204).end();
   });
 
-  // E-mailed sign-in link (venue contacts have no password). Also always 202.
+  // E-mailed sign-in link (venue contacts have no password; anyone whose password sign-in is paused). Also always 202.
   r.post('/sign-in-link', async (req, res) => {
     const { email } = parse(passwordResetRequest, req.body);
-    const user = await findUserByEmail(db, email);
-    if (user) {
-      const token = await issueEmailToken(db, user.id, 'sign-in', LINK_TTL_MS);
-      const link = appLink(appOrigin, `/sign-in/link?token=${token}`);
-      await mailer.send({
-        to: user.email,
-        subject: 'Your Bumperline sign-in link',
-        text: `Open this link to sign in to Bumperline (valid for 20 minutes, once):\n${link}\n\nIf you did not ask for it, ignore this message.`,
-      });
+    if (await mailLimiter.allow('sign-in-link', email)) {
+      const user = await findUserByEmail(db, email);
+      if (user) {
+        const token = await issueEmailToken(db, user.id, 'sign-in', LINK_TTL_MS);
+        await mailer.send(signInLinkMail(user.email, appOrigin, token));
+      }
     }
-    res.status(202).json({ status: 'sent-if-known' });
+    res.status(202).json(sentIfKnown);
   });
 
   return r;

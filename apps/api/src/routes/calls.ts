@@ -1,6 +1,8 @@
 // Service calls for staff: the dispatch list, a call with its timeline, opening, moving, assigning.
 import { Router } from 'express';
 import { assignInput, callListQuery, noteInput, openCallInput, severityInput, transitionInput } from '@bumperline/contracts/calls';
+import { can } from '@bumperline/contracts/roles';
+import { maskAddress } from '@bumperline/contracts/phone';
 import { rankTechnicians } from '@bumperline/domain/routes/technician-ranking';
 import {
   getCall,
@@ -51,13 +53,14 @@ export function callsRouter(deps: { scoped: ReturnType<typeof makeScoped>; appOr
 
   r.get(
     '/:id',
-    scoped('calls:read', async ({ tx, req }) => {
+    scoped('calls:read', async ({ tx, req, actor }) => {
       const id = idParam(req);
       const call = await getCall(tx, id);
       if (!call) throw new NotFoundError('service call');
       // One transaction is one connection: its queries run one after another.
       const events = await listEvents(tx, id);
-      const messages = await listCallMessages(tx, id);
+      const sent = await listCallMessages(tx, id);
+      const messages = can(actor.role, 'calls:contacts') ? sent : sent.map((m) => ({ ...m, toAddress: maskAddress(m.toAddress) }));
       const photoList = await listPhotos(tx, id);
       return { call, events, messages, photos: photoList };
     }),

@@ -11,7 +11,7 @@ import { parse } from '../http/validate.ts';
 const activityQuery = z.strictObject({
   entity: z.string().max(40).optional(),
   entityId: z.string().max(60).optional(),
-  before: z.coerce.number().int().positive().optional(),
+  before: z.coerce.number().int().positive().max(Number.MAX_SAFE_INTEGER).optional(),
   limit: z.coerce.number().int().min(1).max(200).default(50),
 });
 

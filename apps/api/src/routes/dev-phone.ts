@@ -6,7 +6,9 @@ import { z } from 'zod';
 import type { FakeMessage, SmsFake } from '@bumperline/fakes/sms/sms-fake';
 import { requiredText } from '@bumperline/contracts/common';
 import { phoneNumber } from '@bumperline/contracts/phone';
+import { hostOf } from '../http/csrf.ts';
 import { HttpError } from '../http/errors.ts';
+import { refuseNulBytes } from '../http/nul-bytes.ts';
 import { parse } from '../http/validate.ts';
 
 const replyInput = z.object({ from: phoneNumber, body: requiredText(1600) });
@@ -26,7 +28,7 @@ const DIRECTION: Record<FakeMessage['direction'], string> = {
 /** A form post from another site must not text the app in someone's name, even in development. */
 const sameOriginOnly: RequestHandler = (req, _res, next) => {
   const origin = req.headers.origin;
-  if (origin && origin !== 'null' && new URL(origin).host !== req.headers.host) {
+  if (origin !== undefined && hostOf(origin) !== req.headers.host) {
     throw new HttpError(403, 'Cross-site request refused', 'This form can only be sent from this page.', undefined, 'csrf');
   }
   next();
@@ -85,9 +87,12 @@ export function devPhoneRouter(fake: SmsFake): Router {
     res.json({ messages: fake.messages() });
   });
   r.get('/phone', (req, res) => {
+    // With the app-wide "no-referrer" policy a browser posts this page's form with `Origin: null`, which
+    // the same-origin check refuses; "same-origin" lets it send the real origin to this same site.
+    res.setHeader('Referrer-Policy', 'same-origin');
     res.type('html').send(page(req.baseUrl, fake.messages()));
   });
-  r.post('/phone/reply', sameOriginOnly, express.urlencoded({ extended: false, limit: '10kb' }), async (req, res) => {
+  r.post('/phone/reply', sameOriginOnly, express.urlencoded({ extended: false, limit: '10kb' }), refuseNulBytes, async (req, res) => {
     const { from, body } = parse(replyInput, req.body ?? {});
     await fake.reply(from, body);
     res.redirect(303, `${req.baseUrl}/phone#${anchorOf(from)}`);

@@ -26,7 +26,7 @@ export function devRouter(mail: MailFake): Router {
 <title>Captured e-mail · Bumperline development</title>
 <style>body{font-family:system-ui,sans-serif;max-width:48rem;margin:2rem auto;padding:0 1rem;color:#111827;background:#f8fafc}
 article{background:#fff;border:1px solid #cbd5e1;border-radius:.5rem;padding:1rem;margin:1rem 0}h1{font-size:1.4rem}h2{font-size:1.1rem;margin:0}
-header p{margin:.25rem 0;color:#374151}pre{white-space:pre-wrap;font-family:inherit}a{color:#1d4ed8}</style></head>
+header p{margin:.25rem 0;color:#374151}pre{white-space:pre-wrap;overflow-wrap:anywhere;font-family:inherit}a{color:#1d4ed8}</style></head>
 <body><main><h1>Captured e-mail (development only)</h1><p>Messages the app sent while the local mail fake stands in for SMTP, newest first.</p>
 ${rows || '<p>No messages yet.</p>'}</main></body></html>`);
   });

@@ -88,7 +88,12 @@ function send(res: Response, status: number, body: string) {
 }
 
 const str = (v: unknown) => (typeof v === 'string' ? v : undefined);
-const tokenOf = (req: Request) => str(req.params.token) ?? '';
+// Our tokens are base64url; anything else (a NUL, a space, a novel) cannot be one, so it is looked up as ''.
+const asToken = (v: unknown) => {
+  const t = str(v) ?? '';
+  return /^[A-Za-z0-9_-]{1,100}$/.test(t) ? t : '';
+};
+const tokenOf = (req: Request) => asToken(req.params.token);
 
 type Issue = z.core.$ZodIssue;
 
@@ -254,7 +259,7 @@ export function publicTagsRouter(deps: { db: Db; photos: PhotoStore; appOrigin: 
     '/t/:token/thanks',
     htmlPage(async (req, res) => {
       const tag = await findActiveTag(db, tokenOf(req));
-      const found = await findCallByStatus(db, str(req.query.call) ?? '');
+      const found = await findCallByStatus(db, asToken(req.query.call));
       if (!tag || !found || found.tenant_id !== tag.tenant_id) return send(res, 404, unknownStatus());
       const call = await withScope(db, { tenantId: found.tenant_id }, (tx) => getCall(tx, found.call_id));
       if (!call || call.gameId !== tag.game_id) return send(res, 404, unknownStatus());

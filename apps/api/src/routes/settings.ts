@@ -27,6 +27,7 @@ export const settingsUpdate = z.strictObject({
         .string()
         .url()
         .max(300)
+        .regex(/^https?:\/\//, { error: 'must start with https:// or http://' })
         .regex(/\{z\}.*\{x\}.*\{y\}/, { error: 'must contain {z}, {x} and {y}' }),
     ])
     .optional(),

@@ -11,6 +11,7 @@ import { insertEvent } from '@bumperline/db/queries/calls';
 import { outbox, serviceCalls, smsOptOuts } from '@bumperline/db/schema/index';
 import { tenantMatches } from '@bumperline/db/schema/rls';
 import { HttpError, ValidationError } from '../http/errors.ts';
+import { refuseNulBytes } from '../http/nul-bytes.ts';
 import { answerAssignment } from '../services/service-calls.ts';
 
 export interface SmsWebhookDeps {
@@ -74,6 +75,7 @@ export function smsWebhookRouter(deps: SmsWebhookDeps): Router {
   const r = Router();
   r.use(express.urlencoded({ extended: false, limit: '20kb' }));
   r.use(requireSignature(deps));
+  r.use(refuseNulBytes);
 
   r.post('/inbound', async (req, res) => {
     const from = requiredParam(req.body, 'From');

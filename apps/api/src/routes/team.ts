@@ -2,21 +2,23 @@
 import { Router } from 'express';
 import { acceptInvitationInput, invitationInput, memberRoleUpdate } from '@bumperline/contracts/auth';
 import { roleLabels } from '@bumperline/contracts/roles';
+import { eq } from 'drizzle-orm';
 import { withScope, type Db } from '@bumperline/db/client';
 import {
   addMember,
+  claimInvitation,
   countOwners,
   findInvitationByTokenHash,
   getMember,
   insertInvitation,
   listMembers,
   listOpenInvitations,
-  markInvitationAccepted,
   removeMember,
   revokeInvitation,
   setMemberRole,
 } from '@bumperline/db/queries/team';
 import { findUserByEmail, setActiveCompany } from '@bumperline/db/queries/identity';
+import { recordEmailProof } from '@bumperline/db/queries/email-proof';
 import { recordAudit } from '@bumperline/db/queries/audit';
 import { users } from '@bumperline/db/schema/index';
 import { hashPassword } from '@bumperline/db/passwords';
@@ -145,41 +147,64 @@ export function invitationsRouter(db: Db): Router {
     return inv;
   }
 
+  // An account whose address nobody has confirmed does not count: the invitee holds a link mailed to the
+  // address, which proves it, and takes that account over as if it were new (see email-proof.ts).
+  const provenAccount = async (email: string) => {
+    const user = await findUserByEmail(db, email);
+    return { user, proven: user?.emailVerifiedAt ? user : undefined };
+  };
+
   r.get('/:token', async (req, res) => {
     const inv = await lookup(req.params.token);
-    const existing = await findUserByEmail(db, inv.email);
-    res.json({ companyName: inv.tenant_name, email: inv.email, role: inv.role, hasAccount: !!existing });
+    const { proven } = await provenAccount(inv.email);
+    res.json({ companyName: inv.tenant_name, email: inv.email, role: inv.role, hasAccount: !!proven });
   });
 
   r.post('/:token/accept', async (req, res) => {
     const inv = await lookup(req.params.token);
     const input = parse(acceptInvitationInput, req.body ?? {});
-    const existing = await findUserByEmail(db, inv.email);
-    let userId: string;
-    if (existing) {
+    const { user, proven } = await provenAccount(inv.email);
+    if (proven) {
       // Joining with an existing account needs that account signed in.
-      if (req.actor?.userId !== existing.id) {
+      if (req.actor?.userId !== proven.id) {
         throw new HttpError(409, 'Sign in first', `Sign in as ${inv.email} to accept this invitation.`, undefined, 'sign-in-required');
       }
-      userId = existing.id;
     } else {
       const errors = [];
       if (!input.name) errors.push({ field: 'name', message: 'is required' });
       if (!input.password) errors.push({ field: 'password', message: 'is required' });
       if (errors.length) throw new ValidationError(errors);
-      userId = '';
     }
-    const passwordHash = input.password && !existing ? await hashPassword(input.password) : null;
-    await withScope(db, { tenantId: inv.tenant_id }, async (tx) => {
-      if (!existing) {
-        const [u] = await tx.insert(users).values({ email: inv.email, name: input.name!, passwordHash }).returning({ id: users.id });
-        userId = u!.id;
+    const passwordHash = proven ? null : await hashPassword(input.password!);
+    const userId = await withScope(db, { tenantId: inv.tenant_id }, async (tx) => {
+      // First, so that of simultaneous accepts one goes on and the others stop here, having written nothing.
+      if (!(await claimInvitation(tx, inv.id))) {
+        throw new HttpError(
+          409,
+          'Invitation already accepted',
+          'This invitation has just been accepted. Sign in instead.',
+          [{ field: 'token', message: 'was already used' }],
+          'conflict',
+        );
       }
-      await addMember(tx, userId, inv.role);
-      await markInvitationAccepted(tx, inv.id);
-      await recordAudit(tx, { actorUserId: userId, action: 'join', entity: 'member', entityId: userId, after: { role: inv.role } });
+      let id: string;
+      if (proven) id = proven.id;
+      else if (user) {
+        await recordEmailProof(tx, user.id, { keepPassword: false });
+        await tx.update(users).set({ name: input.name!, passwordHash }).where(eq(users.id, user.id));
+        id = user.id;
+      } else {
+        const [u] = await tx
+          .insert(users)
+          .values({ email: inv.email, name: input.name!, passwordHash, emailVerifiedAt: new Date() })
+          .returning({ id: users.id });
+        id = u!.id;
+      }
+      await addMember(tx, id, inv.role);
+      await recordAudit(tx, { actorUserId: id, action: 'join', entity: 'member', entityId: id, after: { role: inv.role } });
+      return id;
     });
-    if (req.actor) await setActiveCompany(db, req.actor.sessionId, inv.tenant_id);
+    if (req.actor?.userId === userId) await setActiveCompany(db, req.actor.sessionId, inv.tenant_id);
     res.status(201).json({ companyId: inv.tenant_id, role: inv.role, email: inv.email });
   });
 

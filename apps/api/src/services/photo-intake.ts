@@ -14,8 +14,12 @@ const ACCEPTED = new Set(['image/jpeg', 'image/png', 'image/webp']);
 /** Longest edge kept: plenty to read a part number, far less than a phone camera's full size. */
 const MAX_EDGE = 2560;
 const THUMB_EDGE = 320;
-/** About 120 megapixels: a 108 MP phone photo passes, a tiny file that decodes to a huge image does not. */
-const MAX_INPUT_PIXELS = 120_000_000;
+/**
+ * 50 megapixels (8,660 × 5,773): more than any phone saves by default. Checked from the file's header
+ * before anything is decoded, so a small file that would decode to a huge image ("image bomb") costs
+ * nothing; sharp's own limit stays as a second guard.
+ */
+export const MAX_INPUT_PIXELS = 50_000_000;
 
 /** A form that could not be read, with the status and the field to show the message beside. */
 export interface FormProblem {
@@ -93,6 +97,18 @@ export class PhotoRejected extends Error {}
 export async function preparePhoto(bytes: Buffer): Promise<PreparedPhoto> {
   const type = await fileTypeFromBuffer(bytes);
   if (!type || !ACCEPTED.has(type.mime)) throw new PhotoRejected('The photo must be a JPEG, PNG or WebP picture.');
+  const header = await sharp(bytes)
+    .metadata()
+    .catch(() => undefined);
+  if (!header?.width || !header.height) {
+    throw new PhotoRejected('We could not read this picture. Try another photo, or send the report without it.');
+  }
+  if (header.width * header.height > MAX_INPUT_PIXELS) {
+    const megapixels = Math.round((header.width * header.height) / 1e6);
+    throw new PhotoRejected(
+      `The picture is ${header.width} × ${header.height} pixels (${megapixels} megapixels); the most we take is ${MAX_INPUT_PIXELS / 1e6}. Send a smaller photo, or the report without it.`,
+    );
+  }
   try {
     const { data, info } = await sharp(bytes, { failOn: 'error', limitInputPixels: MAX_INPUT_PIXELS })
       .rotate()

@@ -7,6 +7,7 @@ export const paths = {
   signInLinkOpen: '/sign-in/link',
   forgotPassword: '/forgot-password',
   resetPassword: '/reset-password',
+  verifyEmail: '/verify-email',
   invitation: '/invitation',
   today: '/today',
   venues: '/venues',

@@ -11,6 +11,7 @@ import { SignUpPage } from '../features/auth/sign-up-page.tsx';
 import { RequestLinkPage, ResetPasswordPage } from '../features/auth/password-pages.tsx';
 import { LinkSignInPage } from '../features/auth/link-sign-in-page.tsx';
 import { InvitationPage } from '../features/auth/invitation-page.tsx';
+import { VerifyEmailPage } from '../features/auth/verify-email-page.tsx';
 import { StartPage } from './start-page.tsx';
 import { LandingPage } from '../features/home/landing-page.tsx';
 import { NotFoundPage } from './not-found-page.tsx';
@@ -55,6 +56,7 @@ export const router = createBrowserRouter([
       { path: paths.signInLinkOpen, element: <LinkSignInPage /> },
       { path: paths.forgotPassword, element: <RequestLinkPage kind="password-reset" /> },
       { path: paths.resetPassword, element: <ResetPasswordPage /> },
+      { path: paths.verifyEmail, element: <VerifyEmailPage /> },
       { path: paths.invitation, element: <InvitationPage /> },
       {
         element: (

@@ -1,7 +1,7 @@
 // The one table: search, sortable headers, keyset paging and CSV export, with loading/empty/error states.
 import { ArrowDown, ArrowUp, ArrowUpDown, ChevronLeft, ChevronRight, Download, Search } from 'lucide-react';
 import { useEffect, useState, type ReactNode } from 'react';
-import Papa from 'papaparse';
+import { toCsv } from '../lib/csv.ts';
 import { Empty, ErrorState, Loading } from './states.tsx';
 import { inputClass } from './field.tsx';
 
@@ -62,10 +62,10 @@ export function DataTable<T, S extends string>(p: DataTableProps<T, S>) {
     setExporting(true);
     try {
       const all = await p.exportAll();
-      const csv = Papa.unparse({
-        fields: p.columns.map((c) => c.header),
-        data: all.map((row) => p.columns.map((c) => c.csv(row) ?? '')),
-      });
+      const csv = toCsv(
+        p.columns.map((c) => c.header),
+        all.map((row) => p.columns.map((c) => c.csv(row))),
+      );
       const url = URL.createObjectURL(new Blob([csv], { type: 'text/csv;charset=utf-8' }));
       const a = document.createElement('a');
       a.href = url;

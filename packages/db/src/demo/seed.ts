@@ -1,6 +1,6 @@
 // Seeds the demo scenario once: running it again finds the demo company and changes nothing.
 // Runs as the owner role (which may write for several companies).
-import { createHash } from 'node:crypto';
+import { randomBytes } from 'node:crypto';
 import { eq, inArray } from 'drizzle-orm';
 import type { Db } from '../client.ts';
 import {
@@ -35,9 +35,10 @@ import { seededRandom } from './random.ts';
 const VENUES = 40;
 const GAMES = 150;
 
-// Tag tokens must be unguessable in real use; demo tokens are derived so the demo is reproducible.
-function demoToken(tenantId: string, i: number): string {
-  return createHash('sha256').update(`demo-tag:${tenantId}:${i}`).digest('base64url').slice(0, 24);
+// Tag tokens are random even in the demo: a token derived from anything in the source could be
+// computed by anyone who reads it.
+function demoToken(): string {
+  return randomBytes(18).toString('base64url');
 }
 
 export async function seedDemo(db: Db): Promise<boolean> {
@@ -53,7 +54,7 @@ export async function seedDemo(db: Db): Promise<boolean> {
       for (const p of people) {
         const [u] = await tx
           .insert(users)
-          .values({ email: p.email, name: p.name, passwordHash, phone: p.phone })
+          .values({ email: p.email, name: p.name, passwordHash, phone: p.phone, emailVerifiedAt: new Date() })
           .onConflictDoNothing()
           .returning({ id: users.id });
         const userId = u?.id ?? (await tx.select({ id: users.id }).from(users).where(eq(users.email, p.email)))[0]!.id;
@@ -120,7 +121,7 @@ export async function seedDemo(db: Db): Promise<boolean> {
             status,
             installedOn: installed.toISOString().slice(0, 10),
             pricePerPlayCents: model.kind === 'pinball' ? (rand() < 0.5 ? 100 : 150) : model.kind === 'jukebox' ? 50 : 100,
-            tagToken: demoToken(demoCompany.id, i),
+            tagToken: demoToken(),
             createdAt: installed,
           };
         }),
@@ -175,7 +176,7 @@ export async function seedDemo(db: Db): Promise<boolean> {
         modelId: pm!.id,
         venueId: v!.id,
         serial: `PP-${900 + i}`,
-        tagToken: demoToken(secondCompany.id, i),
+        tagToken: demoToken(),
       })),
     );
   });

@@ -1,6 +1,6 @@
 // Sign-in state: people, their sessions, and the companies they belong to.
 import { and, eq, isNull, sql } from 'drizzle-orm';
-import type { Db } from '../client.ts';
+import type { Db, Tx } from '../client.ts';
 import { withScope } from '../client.ts';
 import { memberships, platformAdmins, tenants, userSessions, users } from '../schema/index.ts';
 
@@ -25,7 +25,7 @@ export async function revokeSession(db: Db, sessionId: string): Promise<void> {
   await db.update(userSessions).set({ revokedAt: new Date() }).where(eq(userSessions.id, sessionId));
 }
 
-export async function revokeAllSessionsOf(db: Db, userId: string): Promise<void> {
+export async function revokeAllSessionsOf(db: Db | Tx, userId: string): Promise<void> {
   await db
     .update(userSessions)
     .set({ revokedAt: new Date() })

@@ -45,8 +45,27 @@ export class InvalidCursorError extends Error {
   }
 }
 
+// A cursor is only decoded JSON from the client: its value must fit the sort key's type before it
+// reaches a cast, or a hand-made one would fail inside the database.
+const INT4 = { min: -2147483648, max: 2147483647 };
+const ISO_TIME = /^\d{4}-\d{2}-\d{2}[T ]\d{2}:\d{2}(:\d{2}(\.\d{1,6})?)?(Z|[+-]\d{2}(:?\d{2})?)?$/;
+function fitsType(v: string, type: SortKey['type']): boolean {
+  if (v.includes('\u0000')) return false;
+  if (type === 'int') return /^-?\d{1,10}$/.test(v) && Number(v) >= INT4.min && Number(v) <= INT4.max;
+  if (type === 'timestamptz') return ISO_TIME.test(v) && isCalendarDate(v.slice(0, 10));
+  return true;
+}
+
+/** 2026-02-30 is not a date (Date.parse would roll it over to March). */
+function isCalendarDate(ymd: string): boolean {
+  const [y, m, d] = ymd.split('-').map(Number) as [number, number, number];
+  const date = new Date(Date.UTC(y, m - 1, d));
+  return y >= 1 && date.getUTCFullYear() === y && date.getUTCMonth() === m - 1 && date.getUTCDate() === d;
+}
+
 export function keysetWhere(key: SortKey, id: AnyPgColumn, order: 'asc' | 'desc', cursor?: Cursor): SQL | undefined {
   if (!cursor) return undefined;
+  if (!fitsType(cursor.v, key.type)) throw new InvalidCursorError();
   const value = sql`cast(${cursor.v} as ${sql.raw(key.type)})`;
   return order === 'asc'
     ? sql`(${key.expr}, ${id}) > (${value}, ${cursor.id}::uuid)`

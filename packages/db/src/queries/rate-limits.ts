@@ -1,6 +1,6 @@
 // Fixed-window counters in PostgreSQL, so that every API instance counts the same hits.
 import { createHash } from 'node:crypto';
-import { eq, sql } from 'drizzle-orm';
+import { eq, lte, sql } from 'drizzle-orm';
 import type { Db } from '../client.ts';
 import { rateLimitCounters } from '../schema/index.ts';
 
@@ -32,4 +32,13 @@ export async function unhitCounter(db: Db, key: string): Promise<void> {
 
 export async function resetCounter(db: Db, key: string): Promise<void> {
   await db.delete(rateLimitCounters).where(eq(rateLimitCounters.key, hashed(key)));
+}
+
+/** Deletes the counters whose window has passed (a later hit would start them again at 1 anyway). */
+export async function deleteExpiredCounters(db: Db): Promise<number> {
+  const gone = await db
+    .delete(rateLimitCounters)
+    .where(lte(rateLimitCounters.resetAt, sql`now()`))
+    .returning({ key: rateLimitCounters.key });
+  return gone.length;
 }

@@ -1,5 +1,5 @@
 // Members of the current company and invitations to join it.
-import { and, eq, isNull, sql } from 'drizzle-orm';
+import { and, eq, gt, isNull, sql } from 'drizzle-orm';
 import type { Tx } from '../client.ts';
 import { invitations, memberships, users } from '../schema/index.ts';
 import { currentTenant } from '../schema/rls.ts';
@@ -80,11 +80,25 @@ export async function revokeInvitation(tx: Tx, id: string) {
   return r.length > 0;
 }
 
-export async function markInvitationAccepted(tx: Tx, id: string) {
-  await tx
+/**
+ * Marks the invitation accepted if it is still open; false if not. The update takes the row's lock, so
+ * of several simultaneous accepts one wins and the others, once it commits, find it taken.
+ */
+export async function claimInvitation(tx: Tx, id: string): Promise<boolean> {
+  const claimed = await tx
     .update(invitations)
     .set({ acceptedAt: new Date() })
-    .where(and(eq(invitations.tenantId, currentTenant), eq(invitations.id, id)));
+    .where(
+      and(
+        eq(invitations.tenantId, currentTenant),
+        eq(invitations.id, id),
+        isNull(invitations.acceptedAt),
+        isNull(invitations.revokedAt),
+        gt(invitations.expiresAt, sql`now()`),
+      ),
+    )
+    .returning({ id: invitations.id });
+  return claimed.length > 0;
 }
 
 export type InvitationByToken = {

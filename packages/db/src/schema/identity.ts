@@ -12,6 +12,11 @@ export const users = pgTable(
     passwordHash: text('password_hash'),
     /** Mobile number in E.164 (+13125550100), for SMS. */
     phone: text('phone'),
+    /**
+     * When the person first opened a link mailed to this address. Until then the password signs nobody
+     * in, and the first link other than the sign-up's own confirmation drops it (see queries/email-proof.ts).
+     */
+    emailVerifiedAt: timestamp('email_verified_at', { withTimezone: true }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [uniqueIndex('users_email_key').on(sql`lower(${t.email})`)],
@@ -33,10 +38,13 @@ export const userSessions = pgTable(
   (t) => [index('user_sessions_user_idx').on(t.userId)],
 );
 
-/** One-time e-mailed tokens: password resets and sign-in links (venue contacts sign in without a password). */
+/**
+ * One-time e-mailed tokens: password resets, sign-in links (venue contacts sign in without a password)
+ * and the confirmation of a new sign-up's address.
+ */
 export const emailTokens = pgTable('email_tokens', {
   tokenHash: text('token_hash').primaryKey(),
-  purpose: text('purpose', { enum: ['password-reset', 'sign-in'] }).notNull(),
+  purpose: text('purpose', { enum: ['password-reset', 'sign-in', 'verify-email'] }).notNull(),
   userId: uuid('user_id')
     .notNull()
     .references(() => users.id, { onDelete: 'cascade' }),

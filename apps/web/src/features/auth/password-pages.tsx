@@ -32,7 +32,7 @@ export function RequestLinkPage({ kind }: { kind: 'password-reset' | 'sign-in-li
           <p className="text-ink-soft">
             {kind === 'password-reset'
               ? 'Enter your e-mail and we will send a link to choose a new password.'
-              : 'Venue contacts sign in without a password: we e-mail you a link that works once.'}
+              : 'We e-mail you a link that signs you in once, no password needed. Venue contacts always sign in this way.'}
           </p>
           <Field label="E-mail" error={fieldMessage(formState.errors.email?.message)}>
             {(a) => <input {...a} type="email" autoComplete="email" className={inputClass} {...register('email')} />}

@@ -2,15 +2,14 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
-import { Link, useNavigate } from 'react-router-dom';
-import { useQueryClient } from '@tanstack/react-query';
+import { Link } from 'react-router-dom';
 import { signUpInput } from '@bumperline/contracts/auth';
 import { Field, inputClass } from '../../components/field.tsx';
 import { applyServerErrors, fieldMessage } from '../../components/form-errors.ts';
 import { post } from '../../lib/api-client.ts';
-import { signInWithPassword } from '../../lib/auth-client.ts';
 import { paths } from '../../app/paths.ts';
 import { AuthLayout, FormAlert } from './auth-layout.tsx';
+import { ResendConfirmation } from './resend-confirmation.tsx';
 
 const zones = [
   'America/Chicago',
@@ -27,9 +26,9 @@ const zones = [
 ];
 
 export function SignUpPage() {
-  const navigate = useNavigate();
-  const qc = useQueryClient();
   const [formError, setFormError] = useState<string | null>(null);
+  // The address the link went to: the password signs in only once it is confirmed.
+  const [sentTo, setSentTo] = useState<string | null>(null);
   const defaultZone = Intl.DateTimeFormat().resolvedOptions().timeZone;
   const form = useForm<z.input<typeof signUpInput>, unknown, z.output<typeof signUpInput>>({
     resolver: zodResolver(signUpInput),
@@ -49,13 +48,13 @@ export function SignUpPage() {
     setFormError(null);
     try {
       await post('/api/account/sign-up', values);
-      await signInWithPassword(values.email, values.password);
-      await qc.resetQueries();
-      navigate(paths.home, { replace: true });
+      setSentTo(values.email);
     } catch (err) {
       setFormError(applyServerErrors(err, setError, ['companyName', 'name', 'email', 'password', 'timeZone', 'currency']));
     }
   });
+
+  if (sentTo) return <CheckYourEmail email={sentTo} />;
 
   return (
     <AuthLayout
@@ -111,6 +110,24 @@ export function SignUpPage() {
           {formState.isSubmitting ? 'Creating…' : 'Create company'}
         </button>
       </form>
+    </AuthLayout>
+  );
+}
+
+function CheckYourEmail({ email }: { email: string }) {
+  return (
+    <AuthLayout title="Check your e-mail">
+      <p className="mb-3">
+        We sent a message to <strong>{email}</strong>. Open the link in it to confirm the address, then sign in with the password you chose.
+        The link works for 24 hours.
+      </p>
+      <p className="mb-4 text-ink-soft">Nothing there after a few minutes? Look in the spam folder, or:</p>
+      <ResendConfirmation email={email} />
+      <p className="text-center">
+        <Link className="link" to={paths.signIn}>
+          Go to sign in
+        </Link>
+      </p>
     </AuthLayout>
   );
 }

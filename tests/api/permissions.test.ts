@@ -1,0 +1,593 @@
+// Every route of the app, found by walking its router, against a table written here by hand: the
+// permission that guards it, or that it needs only a signed-in person, or nobody. Each route is then
+// called as every role and signed out, with real ids, and must answer exactly as the table says: 403
+// for a role without the permission, 401 signed out, and the handler's own answer for the others.
+// A new route fails this file until it is added to the table below.
+import { randomBytes } from 'node:crypto';
+import { mkdtemp, rm } from 'node:fs/promises';
+import os from 'node:os';
+import path from 'node:path';
+import request, { type Response } from 'supertest';
+import sharp from 'sharp';
+import twilio from 'twilio';
+import type { Express } from 'express';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { and, eq } from 'drizzle-orm';
+import { permissions, roles, type Permission, type Role } from '@bumperline/contracts/roles';
+import { withScope } from '@bumperline/db/client';
+import { insertInvitation } from '@bumperline/db/queries/team';
+import { linkVenueContact } from '@bumperline/db/queries/venue-contacts';
+import { callPhotos, games, serviceCalls, venues } from '@bumperline/db/schema/index';
+import { newToken } from '@bumperline/api/auth/tokens';
+import { folderPhotoStore } from '@bumperline/api/services/photo-store';
+import { buildTestApp, JSON_HEADERS, ORIGIN, signedInAgent, SMS_AUTH_TOKEN, type Agent, type TestApp } from '../support/app.ts';
+import { addGame, addMember, assignServiceCall, openServiceCall } from '../support/call-factories.ts';
+import { createFullCompany, type FullCompany } from '../support/full-company.ts';
+
+/** Who may do what, as agreed; the app's own table (packages/contracts/src/roles.ts) must equal it. */
+const whoMay: Record<Permission, readonly Role[]> = {
+  'venues:read': ['owner', 'dispatcher', 'technician'],
+  'venues:write': ['owner', 'dispatcher'],
+  'games:read': ['owner', 'dispatcher', 'technician'],
+  'games:write': ['owner', 'dispatcher'],
+  'models:write': ['owner', 'dispatcher'],
+  'team:read': ['owner', 'dispatcher'],
+  'team:manage': ['owner'],
+  'company:manage': ['owner'],
+  'audit:read': ['owner'],
+  'calls:read': ['owner', 'dispatcher', 'technician'],
+  'calls:open': ['owner', 'dispatcher', 'technician'],
+  'calls:dispatch': ['owner', 'dispatcher'],
+  'calls:work': ['owner', 'dispatcher', 'technician'],
+  'calls:contacts': ['owner', 'dispatcher'],
+  'settings:manage': ['owner'],
+  'venue-view': ['venue_contact'],
+};
+
+/**
+ * - a permission: `scoped(permission, …)` guards the route;
+ * - 'signed-in': any signed-in person (requireActor), whatever their role;
+ * - 'public': no sign-in (health, game-tag pages, invitation links, password reset, signed provider webhooks);
+ * - 'dev-only': the demo's loopback-only pages, mounted only while fakes stand in for mail and SMS.
+ */
+type Access = Permission | 'signed-in' | 'public' | 'dev-only';
+
+interface Caller {
+  who: Role | 'signed-out';
+  agent: Agent;
+}
+
+interface RouteCase {
+  access: Access;
+  /** The request, with real ids; rows it changes are made fresh for each call. */
+  probe: (c: Caller) => PromiseLike<Response>;
+  /** What a caller the guard lets through gets (signed out, for a public route). */
+  ok: number;
+  /** Roles the guard lets through whose request the handler itself answers otherwise, and how. */
+  handler?: Partial<Record<Role, number>>;
+}
+
+let t: TestApp;
+let photoDir: string;
+let company: FullCompany;
+const agents = {} as Record<Role | 'signed-out', Agent>;
+/** A report with a photo sent through the game-tag page, so that the app's own photo store holds the file. */
+let reported: { gameId: string; tagToken: string; statusToken: string; callId: string; photoId: string };
+
+let serial = 0;
+const unique = (prefix: string) => `${prefix}-${++serial}-${randomBytes(3).toString('hex')}`;
+const asOwner = () => ({ tenantId: company.tenantId, userId: company.ownerId });
+
+async function freshVenue(): Promise<string> {
+  const [v] = await t.db.owner
+    .insert(venues)
+    .values({
+      tenantId: company.tenantId,
+      name: unique('Venue'),
+      addressLine: '9 Probe Street',
+      city: 'Testville',
+      latitude: 41.9,
+      longitude: -87.6,
+    })
+    .returning({ id: venues.id });
+  return v!.id;
+}
+
+async function freshInvitation(): Promise<{ id: string; token: string }> {
+  const { token, hash } = newToken();
+  const id = await withScope(t.db.app, asOwner(), (tx) =>
+    insertInvitation(tx, {
+      email: `${unique('invited')}@example.test`,
+      role: 'technician',
+      tokenHash: hash,
+      invitedBy: company.ownerId,
+      expiresAt: new Date(Date.now() + 24 * 3600_000),
+    }),
+  );
+  return { id, token };
+}
+
+const freshCall = () => openServiceCall(t.db, company, { problem: 'no_sound' });
+
+/** A new call assigned to the company's technician, and its version after the assignment. */
+async function freshAssignedCall(): Promise<{ id: string; version: number }> {
+  const id = await freshCall();
+  const view = await assignServiceCall(t.db, company, id, company.technician.id);
+  return { id, version: view.version };
+}
+
+/** Posts a form to an SMS webhook, signed with our key for our public URL as the provider does. */
+function webhook(agent: Agent, route: string, params: Record<string, string>) {
+  const signature = twilio.getExpectedTwilioSignature(SMS_AUTH_TOKEN, `${ORIGIN}${route}`, params);
+  return agent.post(route).set('X-Twilio-Signature', signature).type('form').send(params);
+}
+
+const routes: Record<string, RouteCase> = {
+  // Public: no sign-in.
+  'GET /api/health': { access: 'public', ok: 200, probe: (c) => c.agent.get('/api/health') },
+  'POST /api/account/sign-up': { access: 'public', ok: 400, probe: (c) => c.agent.post('/api/account/sign-up').set(JSON_HEADERS).send({}) },
+  'POST /api/account/verify-email': {
+    access: 'public',
+    ok: 400,
+    probe: (c) =>
+      c.agent
+        .post('/api/account/verify-email')
+        .set(JSON_HEADERS)
+        .send({ token: 'x'.repeat(40) }),
+  },
+  'POST /api/account/verify-email/resend': {
+    access: 'public',
+    ok: 202,
+    probe: (c) => c.agent.post('/api/account/verify-email/resend').set(JSON_HEADERS).send({ email: company.dispatcher.email }),
+  },
+  'POST /api/account/password-reset': {
+    access: 'public',
+    ok: 202,
+    probe: (c) => c.agent.post('/api/account/password-reset').set(JSON_HEADERS).send({ email: company.dispatcher.email }),
+  },
+  'POST /api/account/password-reset/confirm': {
+    access: 'public',
+    ok: 400,
+    probe: (c) =>
+      c.agent
+        .post('/api/account/password-reset/confirm')
+        .set(JSON_HEADERS)
+        .send({ token: 'x'.repeat(40), password: 'a long enough passphrase' }),
+  },
+  'POST /api/account/sign-in-link': {
+    access: 'public',
+    ok: 202,
+    probe: (c) => c.agent.post('/api/account/sign-in-link').set(JSON_HEADERS).send({ email: company.venueContact.email }),
+  },
+  'GET /api/invitations/:token': { access: 'public', ok: 200, probe: (c) => c.agent.get(`/api/invitations/${company.invitation.token}`) },
+  'POST /api/invitations/:token/accept': {
+    access: 'public',
+    ok: 201,
+    probe: async (c) => {
+      const { token } = await freshInvitation();
+      return c.agent
+        .post(`/api/invitations/${token}/accept`)
+        .set(JSON_HEADERS)
+        .send({ name: 'New Person', password: 'a long enough passphrase' });
+    },
+  },
+  'POST /webhooks/sms/inbound': {
+    access: 'public',
+    ok: 200,
+    probe: (c) => webhook(c.agent, '/webhooks/sms/inbound', { From: '+13125550177', Body: 'HELP' }),
+  },
+  'POST /webhooks/sms/status': {
+    access: 'public',
+    ok: 204,
+    probe: (c) => webhook(c.agent, '/webhooks/sms/status', { MessageSid: unique('SM'), MessageStatus: 'delivered' }),
+  },
+  'GET /t-assets/report.js': { access: 'public', ok: 200, probe: (c) => c.agent.get('/t-assets/report.js') },
+  'GET /t/:token': { access: 'public', ok: 200, probe: (c) => c.agent.get(`/t/${reported.tagToken}`) },
+  'POST /t/:token': {
+    access: 'public',
+    ok: 303,
+    probe: (c) => c.agent.post(`/t/${reported.tagToken}`).field('problem', 'other').field('note', 'still broken'),
+  },
+  'GET /t/:token/thanks': {
+    access: 'public',
+    ok: 200,
+    probe: (c) => c.agent.get(`/t/${reported.tagToken}/thanks`).query({ call: reported.statusToken, sms: 'none' }),
+  },
+  'GET /status/:token': { access: 'public', ok: 200, probe: (c) => c.agent.get(`/status/${reported.statusToken}`) },
+
+  // Demo pages (loopback only).
+  'GET /dev/outbox.json': { access: 'dev-only', ok: 200, probe: (c) => c.agent.get('/dev/outbox.json') },
+  'GET /dev/outbox': { access: 'dev-only', ok: 200, probe: (c) => c.agent.get('/dev/outbox') },
+  'GET /dev/phone.json': { access: 'dev-only', ok: 200, probe: (c) => c.agent.get('/dev/phone.json') },
+  'GET /dev/phone': { access: 'dev-only', ok: 200, probe: (c) => c.agent.get('/dev/phone') },
+  'POST /dev/phone/reply': {
+    access: 'dev-only',
+    ok: 400,
+    probe: (c) => c.agent.post('/dev/phone/reply').type('form').send({ from: 'nobody', body: 'hi' }),
+  },
+
+  // Any signed-in person.
+  'GET /api/account/me': { access: 'signed-in', ok: 200, probe: (c) => c.agent.get('/api/account/me') },
+  'POST /api/account/me/company': {
+    access: 'signed-in',
+    ok: 204,
+    probe: (c) => c.agent.post('/api/account/me/company').set(JSON_HEADERS).send({ tenantId: company.tenantId }),
+  },
+
+  // The company.
+  'GET /api/company': { access: 'venues:read', ok: 200, probe: (c) => c.agent.get('/api/company') },
+  'PATCH /api/company': {
+    access: 'company:manage',
+    ok: 200,
+    probe: (c) => c.agent.patch('/api/company').set(JSON_HEADERS).send({ locale: 'en-US' }),
+  },
+  'GET /api/activity': { access: 'audit:read', ok: 200, probe: (c) => c.agent.get('/api/activity') },
+  'GET /api/settings': { access: 'calls:read', ok: 200, probe: (c) => c.agent.get('/api/settings') },
+  'PATCH /api/settings': {
+    access: 'settings:manage',
+    ok: 200,
+    probe: (c) => c.agent.patch('/api/settings').set(JSON_HEADERS).send({ warnBeforeMinutes: 30 }),
+  },
+
+  // The team.
+  'GET /api/team': { access: 'team:read', ok: 200, probe: (c) => c.agent.get('/api/team') },
+  'POST /api/team/invitations': {
+    access: 'team:manage',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post('/api/team/invitations')
+        .set(JSON_HEADERS)
+        .send({ email: `${unique('invite')}@example.test`, role: 'technician' }),
+  },
+  'DELETE /api/team/invitations/:id': {
+    access: 'team:manage',
+    ok: 204,
+    probe: async (c) => c.agent.delete(`/api/team/invitations/${(await freshInvitation()).id}`).set(JSON_HEADERS),
+  },
+  'PATCH /api/team/members/:id': {
+    access: 'team:manage',
+    ok: 200,
+    probe: async (c) => {
+      const member = await addMember(t.db.owner, company.tenantId, 'technician');
+      return c.agent.patch(`/api/team/members/${member.id}`).set(JSON_HEADERS).send({ role: 'dispatcher' });
+    },
+  },
+  'DELETE /api/team/members/:id': {
+    access: 'team:manage',
+    ok: 204,
+    probe: async (c) => {
+      const member = await addMember(t.db.owner, company.tenantId, 'technician');
+      return c.agent.delete(`/api/team/members/${member.id}`).set(JSON_HEADERS);
+    },
+  },
+
+  // Venues.
+  'GET /api/venues': { access: 'venues:read', ok: 200, probe: (c) => c.agent.get('/api/venues') },
+  'GET /api/venues/:id': { access: 'venues:read', ok: 200, probe: (c) => c.agent.get(`/api/venues/${company.venueIds[0]}`) },
+  'POST /api/venues': {
+    access: 'venues:write',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post('/api/venues')
+        .set(JSON_HEADERS)
+        .send({ name: unique('New venue'), addressLine: '1 Probe Street', city: 'Testville', latitude: 41.9, longitude: -87.6 }),
+  },
+  'PATCH /api/venues/:id': {
+    access: 'venues:write',
+    ok: 200,
+    probe: async (c) =>
+      c.agent
+        .patch(`/api/venues/${await freshVenue()}`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, notes: 'Back door' }),
+  },
+  'POST /api/venues/:id/retire': {
+    access: 'venues:write',
+    ok: 200,
+    probe: async (c) => c.agent.post(`/api/venues/${await freshVenue()}/retire`).set(JSON_HEADERS),
+  },
+  'GET /api/venues/:id/contacts': {
+    access: 'venues:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/venues/${company.venueIds[0]}/contacts`),
+  },
+  'POST /api/venues/:id/contacts': {
+    access: 'venues:write',
+    ok: 201,
+    probe: async (c) =>
+      c.agent
+        .post(`/api/venues/${await freshVenue()}/contacts`)
+        .set(JSON_HEADERS)
+        .send({ userId: company.venueContact.id }),
+  },
+  'DELETE /api/venues/:id/contacts/:userId': {
+    access: 'venues:write',
+    ok: 204,
+    probe: async (c) => {
+      const venueId = await freshVenue();
+      await withScope(t.db.app, asOwner(), (tx) => linkVenueContact(tx, venueId, company.venueContact.id));
+      return c.agent.delete(`/api/venues/${venueId}/contacts/${company.venueContact.id}`).set(JSON_HEADERS);
+    },
+  },
+  'GET /api/venues/:id/tag-sheet': {
+    access: 'venues:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/venues/${company.venueIds[0]}/tag-sheet`),
+  },
+
+  // Games and models.
+  'GET /api/games': { access: 'games:read', ok: 200, probe: (c) => c.agent.get('/api/games') },
+  'GET /api/games/summary': { access: 'games:read', ok: 200, probe: (c) => c.agent.get('/api/games/summary') },
+  'GET /api/games/:id': { access: 'games:read', ok: 200, probe: (c) => c.agent.get(`/api/games/${company.gameIds[0]}`) },
+  'GET /api/games/:id/downtime': {
+    access: 'games:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/games/${company.gameIds[0]}/downtime`),
+  },
+  'POST /api/games': {
+    access: 'games:write',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post('/api/games')
+        .set(JSON_HEADERS)
+        .send({ modelId: company.modelId, venueId: company.venueIds[1], serial: unique('SN') }),
+  },
+  'PATCH /api/games/:id': {
+    access: 'games:write',
+    ok: 200,
+    probe: async (c) =>
+      c.agent
+        .patch(`/api/games/${await addGame(t.db, company)}`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, notes: 'Coin door sticks' }),
+  },
+  'POST /api/games/:id/retire': {
+    access: 'games:write',
+    ok: 200,
+    probe: async (c) => c.agent.post(`/api/games/${await addGame(t.db, company)}/retire`).set(JSON_HEADERS),
+  },
+  'POST /api/games/:id/regenerate-tag': {
+    access: 'games:write',
+    ok: 200,
+    probe: async (c) => c.agent.post(`/api/games/${await addGame(t.db, company)}/regenerate-tag`).set(JSON_HEADERS),
+  },
+  'GET /api/models': { access: 'games:read', ok: 200, probe: (c) => c.agent.get('/api/models') },
+  'POST /api/models': {
+    access: 'models:write',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post('/api/models')
+        .set(JSON_HEADERS)
+        .send({ maker: 'Probeworks', title: unique('Model'), kind: 'darts' }),
+  },
+
+  // Service calls.
+  'GET /api/calls': { access: 'calls:read', ok: 200, probe: (c) => c.agent.get('/api/calls') },
+  'POST /api/calls': {
+    access: 'calls:open',
+    ok: 201,
+    probe: async (c) =>
+      c.agent
+        .post('/api/calls')
+        .set(JSON_HEADERS)
+        .send({ gameId: await addGame(t.db, company), problem: 'dead' }),
+  },
+  'GET /api/calls/:id': { access: 'calls:read', ok: 200, probe: (c) => c.agent.get(`/api/calls/${company.downCallId}`) },
+  'GET /api/calls/:id/technicians': {
+    access: 'calls:dispatch',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/calls/${company.downCallId}/technicians`),
+  },
+  'POST /api/calls/:id/assign': {
+    access: 'calls:dispatch',
+    ok: 200,
+    probe: async (c) =>
+      c.agent
+        .post(`/api/calls/${await freshCall()}/assign`)
+        .set(JSON_HEADERS)
+        .send({ technicianId: company.technician.id, version: 1 }),
+  },
+  'POST /api/calls/:id/transition': {
+    access: 'calls:work',
+    ok: 200,
+    probe: async (c) => {
+      const call = await freshAssignedCall();
+      return c.agent.post(`/api/calls/${call.id}/transition`).set(JSON_HEADERS).send({ to: 'on_the_way', version: call.version });
+    },
+  },
+  'POST /api/calls/:id/answer': {
+    access: 'calls:work',
+    ok: 200,
+    // Only the assigned technician has an assignment to answer.
+    handler: { owner: 404, dispatcher: 404 },
+    probe: async (c) =>
+      c.agent
+        .post(`/api/calls/${(await freshAssignedCall()).id}/answer`)
+        .set(JSON_HEADERS)
+        .send({ accept: true }),
+  },
+  'POST /api/calls/:id/severity': {
+    access: 'calls:dispatch',
+    ok: 200,
+    probe: async (c) =>
+      c.agent
+        .post(`/api/calls/${await freshCall()}/severity`)
+        .set(JSON_HEADERS)
+        .send({ severity: 'cosmetic', version: 1 }),
+  },
+  'POST /api/calls/:id/notes': {
+    access: 'calls:work',
+    ok: 201,
+    probe: (c) => c.agent.post(`/api/calls/${company.downCallId}/notes`).set(JSON_HEADERS).send({ note: 'Checked the fuses' }),
+  },
+  'GET /api/calls/:id/photos/:photoId': {
+    access: 'calls:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/calls/${reported.callId}/photos/${reported.photoId}`),
+  },
+  'GET /api/technicians': { access: 'calls:dispatch', ok: 200, probe: (c) => c.agent.get('/api/technicians') },
+
+  // The venue contact's view.
+  'GET /api/venue-view': { access: 'venue-view', ok: 200, probe: (c) => c.agent.get('/api/venue-view') },
+  'POST /api/venue-view/calls': {
+    access: 'venue-view',
+    ok: 201,
+    // A new game at the venue the contact speaks for (venueIds[0]).
+    probe: async (c) =>
+      c.agent
+        .post('/api/venue-view/calls')
+        .set(JSON_HEADERS)
+        .send({ gameId: await addGame(t.db, company, 0), problem: 'no_credit' }),
+  },
+};
+
+interface ListedRoute {
+  key: string;
+  /** The permissions the route's handlers carry (`scoped` tags the handler it builds). */
+  tags: string[];
+}
+
+interface LayerLike {
+  rawPath?: unknown;
+  handle?: { stack?: LayerLike[]; permission?: unknown };
+  route?: { path: unknown; methods: Record<string, boolean>; stack: { handle: { permission?: unknown } }[] };
+}
+
+function joinPath(prefix: string, part: string): string {
+  const joined = `${prefix}/${part}`.replace(/\/{2,}/g, '/');
+  return joined.length > 1 ? joined.replace(/\/$/, '') : joined;
+}
+
+/** Every route of the app, walking nested routers with the paths they are mounted at. */
+function listRoutes(app: Express): ListedRoute[] {
+  const found: ListedRoute[] = [];
+  const walk = (stack: LayerLike[], prefix: string) => {
+    for (const layer of stack) {
+      if (layer.route) {
+        // A route path that is not a plain string (a RegExp or a list) cannot be named in the table.
+        if (typeof layer.route.path !== 'string') throw new Error(`a route under ${prefix} has a path that is not a string`);
+        const tags = layer.route.stack.map((s) => s.handle.permission).filter((p): p is string => typeof p === 'string');
+        for (const method of Object.keys(layer.route.methods)) {
+          found.push({ key: `${method === '_all' ? 'ALL' : method.toUpperCase()} ${joinPath(prefix, layer.route.path)}`, tags });
+        }
+      } else if (Array.isArray(layer.handle?.stack)) {
+        // Express 5's router keeps the path a router was mounted at as `rawPath`; without it the names
+        // below would be wrong, so stop instead of guessing.
+        if (typeof layer.rawPath !== 'string') throw new Error(`cannot tell where a router under "${prefix || '/'}" is mounted`);
+        walk(layer.handle.stack, joinPath(prefix, layer.rawPath));
+      }
+    }
+  };
+  walk((app as unknown as { router: { stack: LayerLike[] } }).router.stack, '');
+  return found;
+}
+
+/** The status, or what else a 401/403/404 was when it is not the plain answer of a guard or a handler. */
+function answer(res: Response): number | string {
+  const body = (res.body ?? {}) as { type?: unknown; detail?: unknown };
+  const code = typeof body.type === 'string' ? body.type.split('/').pop() : undefined;
+  if (res.status === 404 && typeof body.detail === 'string' && body.detail.startsWith('No such route')) return '404 no such route';
+  if (res.status === 401 && code !== 'unauthorized') return `401 ${code ?? 'without a problem type'}`;
+  if (res.status === 403 && code !== 'forbidden') return `403 ${code ?? 'without a problem type'}`;
+  return res.status;
+}
+
+function expectedAnswers(c: RouteCase, mounted: boolean): Record<string, number | string> {
+  if (c.access === 'dev-only') return { 'signed-out': mounted ? c.ok : '404 no such route' };
+  if (c.access === 'public') return { 'signed-out': c.ok };
+  const out: Record<string, number | string> = {};
+  for (const role of roles) {
+    const allowed = c.access === 'signed-in' || whoMay[c.access].includes(role);
+    out[role] = allowed ? (c.handler?.[role] ?? c.ok) : 403;
+  }
+  out['signed-out'] = 401;
+  return out;
+}
+
+let listed: ListedRoute[];
+
+beforeAll(async () => {
+  t = await buildTestApp();
+  photoDir = await mkdtemp(path.join(os.tmpdir(), 'bumperline-permissions-photos-'));
+  company = await createFullCompany(t.db, 'Gamma Coin', folderPhotoStore(photoDir));
+  agents.owner = await signedInAgent(t, company.ownerEmail);
+  agents.dispatcher = await signedInAgent(t, company.dispatcher.email);
+  agents.technician = await signedInAgent(t, company.technician.email);
+  agents.venue_contact = await signedInAgent(t, company.venueContact.email);
+  agents['signed-out'] = request.agent(t.app);
+
+  // A report with a photo through the game-tag page, on a game of its own.
+  const gameId = await addGame(t.db, company);
+  const [game] = await t.db.owner
+    .select({ tagToken: games.tagToken })
+    .from(games)
+    .where(and(eq(games.tenantId, company.tenantId), eq(games.id, gameId)));
+  const photo = await sharp({ create: { width: 40, height: 30, channels: 3, background: '#a97' } })
+    .jpeg()
+    .toBuffer();
+  const sent = await request(t.app)
+    .post(`/t/${game!.tagToken}`)
+    .field('problem', 'dead')
+    .attach('photo', photo, { filename: 'cabinet.jpg', contentType: 'image/jpeg' })
+    .expect(303);
+  const statusToken = new URL(sent.headers.location as string, ORIGIN).searchParams.get('call')!;
+  const [row] = await t.db.owner
+    .select({ callId: serviceCalls.id, photoId: callPhotos.id })
+    .from(serviceCalls)
+    .innerJoin(callPhotos, and(eq(callPhotos.tenantId, serviceCalls.tenantId), eq(callPhotos.callId, serviceCalls.id)))
+    .where(and(eq(serviceCalls.tenantId, company.tenantId), eq(serviceCalls.gameId, gameId)));
+  reported = { gameId, tagToken: game!.tagToken, statusToken, callId: row!.callId, photoId: row!.photoId };
+
+  listed = listRoutes(t.app);
+});
+afterAll(async () => {
+  await t.close();
+  await rm(photoDir, { recursive: true, force: true });
+});
+
+describe('the route table', () => {
+  it('the permission table of the app is the one written here', () => {
+    expect(permissions).toEqual(whoMay);
+  });
+
+  it('names every route of the app, and only routes of the app', () => {
+    const keys = new Set(listed.map((r) => r.key));
+    const notInTable = [...keys].filter((key) => !(key in routes));
+    // The demo pages are mounted only while fakes stand in for mail and SMS.
+    const gone = Object.entries(routes)
+      .filter(([key, c]) => c.access !== 'dev-only' && !keys.has(key))
+      .map(([key]) => key);
+    expect(notInTable).toEqual([]);
+    expect(gone).toEqual([]);
+    expect(listed.length).toBe(keys.size);
+  });
+
+  it('each route is built with the permission the table names, and the others with none', () => {
+    const tagged = Object.fromEntries(listed.map((r) => [r.key, r.tags]));
+    const expected = Object.fromEntries(
+      listed.map((r) => {
+        const access = routes[r.key]?.access;
+        return [r.key, access === undefined || access === 'signed-in' || access === 'public' || access === 'dev-only' ? [] : [access]];
+      }),
+    );
+    expect(tagged).toEqual(expected);
+  });
+});
+
+describe('every route answers every role as the table says', () => {
+  for (const [key, c] of Object.entries(routes)) {
+    it(`${key} (${c.access})`, async () => {
+      const mounted = listed.some((r) => r.key === key);
+      const expected = expectedAnswers(c, mounted);
+      const actual: Record<string, number | string> = {};
+      for (const who of Object.keys(expected) as Caller['who'][]) {
+        actual[who] = answer(await c.probe({ who, agent: agents[who] }));
+      }
+      expect(actual).toEqual(expected);
+    });
+  }
+});
