@@ -56,7 +56,7 @@ export default defineConfig({
         test: {
           name: 'unit',
           setupFiles: ['tests/support/fast-check-seed.ts'],
-          include: ['packages/**/src/**/*.test.ts', 'apps/**/src/**/*.test.{ts,tsx}', 'fakes/src/**/*.test.ts'],
+          include: ['packages/**/src/**/*.test.ts', 'apps/**/src/**/*.test.{ts,tsx}', 'fakes/src/**/*.test.ts', 'tests/lint/**/*.test.ts'],
           environment: 'node',
         },
       },

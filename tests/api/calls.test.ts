@@ -331,7 +331,7 @@ describe('venue view', () => {
   });
 });
 
-describe('isolation and settings', () => {
+describe('isolation', () => {
   it("another company's calls are invisible and untouchable", async () => {
     const bOwner = await signedInAgent(t, b.ownerEmail);
     const mine = (await dispatcher.get('/api/calls').query({ state: 'all' }).expect(200)).body.items;
@@ -344,32 +344,6 @@ describe('isolation and settings', () => {
       .set(JSON_HEADERS)
       .send({ to: 'cancelled', version: mine[0].version })
       .expect(404);
-  });
-
-  it('the owner sets response targets; new calls use them; bad values are refused by field', async () => {
-    const bad = await owner
-      .patch('/api/settings')
-      .set(JSON_HEADERS)
-      .send({ responseTargets: { down: 1, fault: 60, cosmetic: 60 } })
-      .expect(400);
-    expect(bad.body.errors[0].field).toBe('responseTargets.down');
-    await dispatcher.patch('/api/settings').set(JSON_HEADERS).send({ warnBeforeMinutes: 10 }).expect(403);
-    await owner
-      .patch('/api/settings')
-      .set(JSON_HEADERS)
-      .send({ responseTargets: { down: 90, fault: 600, cosmetic: 6000 } })
-      .expect(200);
-    const game = await owner
-      .post('/api/games')
-      .set(JSON_HEADERS)
-      .send({ modelId: a.modelId, venueId: a.venueIds[2], serial: 'FRESH-1' })
-      .expect(201);
-    const call = await openCall(game.body.id, 'dead');
-    expect(call.joined).toBe(false);
-    const [c] = await owned<{ minutes: number }>(
-      sql`select extract(epoch from target_at - opened_at)/60 as minutes from service_calls where id = ${call.id}`,
-    );
-    expect(Number(c!.minutes)).toBe(90);
   });
 });
 

@@ -5,7 +5,16 @@ import request from 'supertest';
 import twilio from 'twilio';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { encodeCursor } from '@bumperline/db/queries/keyset';
-import { buildTestApp, JSON_HEADERS, ORIGIN, SMS_AUTH_TOKEN, signedInAgent, type Agent, type TestApp } from '../support/app.ts';
+import {
+  buildTestApp,
+  JSON_HEADERS,
+  ORIGIN,
+  SMS_AUTH_TOKEN,
+  signedInAgent,
+  signInOutcome,
+  type Agent,
+  type TestApp,
+} from '../support/app.ts';
 import { createCompany, type CompanyFixture } from '../support/factories.ts';
 
 let t: TestApp;
@@ -54,6 +63,10 @@ describe('NUL characters', () => {
     const res = await owner.post('/api/calls').set(JSON_HEADERS).send({ gameId: company.gameIds[0], problem: 'dead', 'x\u0000': 1 });
     expect(res.status).toBe(400);
     expect(res.body.errors[0].message).toMatch(/NUL/);
+  });
+
+  it('in a password sign-in are a plain refusal, not a server fault', async () => {
+    expect(await signInOutcome(request.agent(t.app), 'owner\u0000@oddity.test', 'whatever it is')).toBe('credentials');
   });
 
   it('in sign-up are refused, naming the field, and no account is made', async () => {
@@ -110,6 +123,22 @@ describe('numbers and cursors', () => {
 
   it('an activity page beyond any id is refused, naming the field', async () => {
     expectFieldError(await owner.get('/api/activity').query({ before: '1e30' }), 'before');
+  });
+});
+
+describe('addresses and settings', () => {
+  it('a path with broken percent-encoding is a 400 naming the path, not a crash', async () => {
+    for (const path of ['/status/%E0%A4%A', '/api/venues/%E0%A4%A', '/t/%ZZ']) {
+      const res = await request(t.app).get(path);
+      expect(res.status, path).toBe(400);
+      expect(res.body.errors, path).toEqual([{ field: '(path)', message: 'is not a valid URL' }]);
+    }
+  });
+
+  it('a company locale must be a language tag the screens can format with', async () => {
+    const res = await owner.patch('/api/company').set(JSON_HEADERS).send({ locale: 'not_a-locale!!' });
+    expectFieldError(res, 'locale');
+    await owner.patch('/api/company').set(JSON_HEADERS).send({ locale: 'en-GB' }).expect(200);
   });
 });
 

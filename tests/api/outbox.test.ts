@@ -5,7 +5,7 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { and, eq, sql } from 'drizzle-orm';
 import pino from 'pino';
 import { withScope } from '@bumperline/db/client';
-import { enqueueMessage } from '@bumperline/db/queries/calls';
+import { enqueueMessage } from '@bumperline/db/queries/outbox';
 import { outbox, smsOptOuts } from '@bumperline/db/schema/index';
 import { MAX_ATTEMPTS, retryDelayMs, runOutboxOnce, type OutboxDeps } from '@bumperline/api/jobs/outbox-worker';
 import { JOB_LOCKS, runExclusive, startJobs } from '@bumperline/api/jobs/scheduler';

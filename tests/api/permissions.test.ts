@@ -10,7 +10,6 @@ import path from 'node:path';
 import request, { type Response } from 'supertest';
 import sharp from 'sharp';
 import twilio from 'twilio';
-import type { Express } from 'express';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { and, eq } from 'drizzle-orm';
 import { permissions, roles, type Permission, type Role } from '@bumperline/contracts/roles';
@@ -23,6 +22,7 @@ import { folderPhotoStore } from '@bumperline/api/services/photo-store';
 import { buildTestApp, JSON_HEADERS, ORIGIN, signedInAgent, SMS_AUTH_TOKEN, type Agent, type TestApp } from '../support/app.ts';
 import { addGame, addMember, assignServiceCall, openServiceCall } from '../support/call-factories.ts';
 import { createFullCompany, type FullCompany } from '../support/full-company.ts';
+import { listRoutes, type ListedRoute } from '../support/route-list.ts';
 
 /** Who may do what, as agreed; the app's own table (packages/contracts/src/roles.ts) must equal it. */
 const whoMay: Record<Permission, readonly Role[]> = {
@@ -33,6 +33,7 @@ const whoMay: Record<Permission, readonly Role[]> = {
   'models:write': ['owner', 'dispatcher'],
   'team:read': ['owner', 'dispatcher'],
   'team:manage': ['owner'],
+  'company:read': ['owner', 'dispatcher', 'technician'],
   'company:manage': ['owner'],
   'audit:read': ['owner'],
   'calls:read': ['owner', 'dispatcher', 'technician'],
@@ -215,7 +216,7 @@ const routes: Record<string, RouteCase> = {
   },
 
   // The company.
-  'GET /api/company': { access: 'venues:read', ok: 200, probe: (c) => c.agent.get('/api/company') },
+  'GET /api/company': { access: 'company:read', ok: 200, probe: (c) => c.agent.get('/api/company') },
   'PATCH /api/company': {
     access: 'company:manage',
     ok: 200,
@@ -444,47 +445,6 @@ const routes: Record<string, RouteCase> = {
         .send({ gameId: await addGame(t.db, company, 0), problem: 'no_credit' }),
   },
 };
-
-interface ListedRoute {
-  key: string;
-  /** The permissions the route's handlers carry (`scoped` tags the handler it builds). */
-  tags: string[];
-}
-
-interface LayerLike {
-  rawPath?: unknown;
-  handle?: { stack?: LayerLike[]; permission?: unknown };
-  route?: { path: unknown; methods: Record<string, boolean>; stack: { handle: { permission?: unknown } }[] };
-}
-
-function joinPath(prefix: string, part: string): string {
-  const joined = `${prefix}/${part}`.replace(/\/{2,}/g, '/');
-  return joined.length > 1 ? joined.replace(/\/$/, '') : joined;
-}
-
-/** Every route of the app, walking nested routers with the paths they are mounted at. */
-function listRoutes(app: Express): ListedRoute[] {
-  const found: ListedRoute[] = [];
-  const walk = (stack: LayerLike[], prefix: string) => {
-    for (const layer of stack) {
-      if (layer.route) {
-        // A route path that is not a plain string (a RegExp or a list) cannot be named in the table.
-        if (typeof layer.route.path !== 'string') throw new Error(`a route under ${prefix} has a path that is not a string`);
-        const tags = layer.route.stack.map((s) => s.handle.permission).filter((p): p is string => typeof p === 'string');
-        for (const method of Object.keys(layer.route.methods)) {
-          found.push({ key: `${method === '_all' ? 'ALL' : method.toUpperCase()} ${joinPath(prefix, layer.route.path)}`, tags });
-        }
-      } else if (Array.isArray(layer.handle?.stack)) {
-        // Express 5's router keeps the path a router was mounted at as `rawPath`; without it the names
-        // below would be wrong, so stop instead of guessing.
-        if (typeof layer.rawPath !== 'string') throw new Error(`cannot tell where a router under "${prefix || '/'}" is mounted`);
-        walk(layer.handle.stack, joinPath(prefix, layer.rawPath));
-      }
-    }
-  };
-  walk((app as unknown as { router: { stack: LayerLike[] } }).router.stack, '');
-  return found;
-}
 
 /** The status, or what else a 401/403/404 was when it is not the plain answer of a guard or a handler. */
 function answer(res: Response): number | string {

@@ -6,11 +6,11 @@
  */
 import { readFileSync } from 'node:fs';
 import { groupReliability, type GroupMember } from '@bumperline/domain/reliability/availability';
-import { planRouteDay, type RouteStop } from '@bumperline/domain/routes/route-day';
-import { seededRandom } from '@bumperline/domain/routes/seeded-random';
-import { planTour } from '@bumperline/domain/routes/tour-planner';
-import { distanceMatrixKm, travelMinutesMatrix } from '@bumperline/domain/routes/travel-matrix';
-import { parseTsplib, tsplibMatrix } from '@bumperline/domain/routes/tsplib';
+import { planRouteDay, type RouteStop } from '@bumperline/domain/travel/route-day';
+import { seededRandom } from '@bumperline/domain/travel/seeded-random';
+import { planTour } from '@bumperline/domain/travel/tour-planner';
+import { distanceMatrixKm, travelMinutesMatrix } from '@bumperline/domain/travel/travel-matrix';
+import { parseTsplib, tsplibMatrix } from '@bumperline/domain/travel/tsplib';
 
 function time<T>(run: () => T, repeats = 5): { result: T; medianMs: number } {
   run(); // warm up the JIT

@@ -13,7 +13,8 @@ import { createMailer } from '@bumperline/api/services/mailer';
 import { folderPhotoStore } from '@bumperline/api/services/photo-store';
 import { hashPassword } from '@bumperline/db/passwords';
 import { freshDatabase, type TestDatabase } from '../support/database.ts';
-import { createCompany } from '../support/factories.ts';
+import { createCompany, createUser } from '../support/factories.ts';
+import { signIn } from '../support/app.ts';
 
 let db: TestDatabase;
 beforeAll(async () => {
@@ -81,6 +82,49 @@ describe('production logs', () => {
     }
     expect(all).toContain(`GET /t/[redacted] 200`);
     expect(all).toContain(`GET /reset-password?token=[redacted]`);
+  });
+
+  it('keep a failed request’s error code and stack, but not the query’s parameters', async () => {
+    const { lines, logger } = capture();
+    // A database of its own whose venues table is gone: the list query fails inside the handler.
+    const broken = await freshDatabase();
+    try {
+      await broken.owner.execute(sql`drop table venues cascade`);
+      const app = createApp({
+        db: broken.app,
+        mailer: createMailer({ fakePort: 1, from: 'x@y.test' }),
+        logger,
+        authSecret: 'test-secret-that-is-at-least-32-characters-long',
+        smsAuthToken: 'test-twilio-auth-token',
+        photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
+        appOrigin: 'http://127.0.0.1:3999',
+      });
+      const company = await createCompany(broken.owner, 'Broken Tables', 0).catch(() => undefined);
+      expect(company).toBeUndefined(); // the factory needs venues too: the table really is gone
+      const owner = await createUser(broken.owner, { email: 'broken-owner@example.test' });
+      const tenantId = crypto.randomUUID();
+      await broken.owner.execute(
+        sql`insert into tenants (id, name, time_zone, currency) values (${tenantId}, 'Broken', 'America/Chicago', 'USD')`,
+      );
+      await broken.owner.execute(sql`insert into memberships (tenant_id, user_id, role) values (${tenantId}, ${owner.id}, 'owner')`);
+      const agent = request.agent(app);
+      expect(await signIn(agent, owner.email)).toBe(200);
+      const secret = 'someone-searched-for-this@example.test';
+      await agent.get(`/api/venues?q=${encodeURIComponent(secret)}`).expect(500);
+      type Logged = { code?: string; stack?: string; cause?: Logged };
+      const entries = lines.map((l) => JSON.parse(l) as { msg?: string; err?: Logged });
+      const errorLine = entries.find((l) => l.msg === 'unhandled error');
+      // undefined_table, on the database error the failed query wraps: the log still says what went wrong.
+      expect(errorLine?.err?.cause?.code).toBe('42P01');
+      expect(errorLine?.err?.stack).toMatch(/\bat /);
+      expect(lines.join('\n')).not.toContain(secret);
+      // The request's own line stays one short line; the stack is logged once, above.
+      const requestLine = lines.find((l) => l.includes('GET /api/venues?q=[redacted] 500'));
+      expect(requestLine).toBeDefined();
+      expect(requestLine!.length).toBeLessThan(400);
+    } finally {
+      await broken.drop();
+    }
   });
 
   it('never print a failed query’s parameters or the values the database quotes back', async () => {

@@ -6,7 +6,9 @@ import { folderPhotoStore } from '@bumperline/api/services/photo-store';
 // Builds the real API (createApp) on a fresh database, with the mail fake, for supertest.
 import pino from 'pino';
 import request from 'supertest';
-import type { Express } from 'express';
+import { Router, type Express } from 'express';
+import { devRouter } from '@bumperline/api/routes/dev';
+import { devPhoneRouter } from '@bumperline/api/routes/dev-phone';
 import { createApp } from '@bumperline/api/app';
 import { createMailer } from '@bumperline/api/services/mailer';
 import { SignInLimiter, type SignInLimits } from '@bumperline/api/auth/sign-in-limiter';
@@ -69,6 +71,14 @@ async function startTestSms(): Promise<{ sms: TestSms; server: http.Server }> {
  * `signInLimit`: failed sign-ins per account before its password sign-in pauses (default 50, so suites
  * that sign in a lot are not slowed); `signInLimits` sets any of the limiter's limits.
  */
+/** The demo's developer pages over this app's fakes, as startup/demo.ts builds them. */
+function devPages(mail: MailFake, sms?: SmsFake): Router {
+  const router = Router();
+  router.use(devRouter(mail));
+  if (sms) router.use(devPhoneRouter(sms));
+  return router;
+}
+
 export async function buildTestApp(
   opts: { signInLimit?: number; signInLimits?: Partial<SignInLimits>; sms?: boolean } = {},
 ): Promise<TestApp> {
@@ -83,7 +93,7 @@ export async function buildTestApp(
     smsAuthToken: SMS_AUTH_TOKEN,
     photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
     appOrigin: ORIGIN,
-    devPages: { mail, ...(sms ? { sms: sms.sms.fake } : {}) },
+    devPages: devPages(mail, sms?.sms.fake),
     signInLimiter: new SignInLimiter(postgresCounter(db.app), { perAccount: opts.signInLimit ?? 50, ...opts.signInLimits }),
   });
   sms?.server.on('request', app);

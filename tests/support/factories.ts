@@ -12,10 +12,6 @@ export interface CompanyFixture {
   gameIds: string[];
   modelId: string;
 }
-export interface TwoCompanies {
-  a: CompanyFixture;
-  b: CompanyFixture;
-}
 
 export const TEST_PASSWORD = 'correct horse battery staple';
 
@@ -76,8 +72,4 @@ export async function createCompany(db: Db, name: string, venueCount = 2): Promi
     gameIds: gameRows.map((g) => g.id),
     modelId: model!.id,
   };
-}
-
-export async function seedTwoCompanies(db: Db): Promise<TwoCompanies> {
-  return { a: await createCompany(db, 'Alpha Amusements', 3), b: await createCompany(db, 'Beta Games', 2) };
 }

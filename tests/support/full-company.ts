@@ -5,7 +5,7 @@
 import { randomBytes } from 'node:crypto';
 import sharp from 'sharp';
 import { withScope } from '@bumperline/db/client';
-import { getSettings } from '@bumperline/db/queries/calls';
+import { getSettings } from '@bumperline/db/queries/settings';
 import { recordAudit } from '@bumperline/db/queries/audit';
 import { insertInvitation } from '@bumperline/db/queries/team';
 import { linkVenueContact } from '@bumperline/db/queries/venue-contacts';

@@ -1,13 +1,12 @@
 // Builds the Express app from its dependencies; listening happens in main.ts, so tests get the app.
 import { existsSync } from 'node:fs';
 import path from 'node:path';
-import express, { type Express } from 'express';
+import express, { type Express, type Router } from 'express';
 import helmet from 'helmet';
 import type { Logger } from 'pino';
 import { ExpressAuth } from '@auth/express';
 import type { Db } from '@bumperline/db/client';
-import type { MailFake } from '@bumperline/fakes/mail/mail-fake';
-import { InvalidCursorError } from '@bumperline/db/queries/keyset';
+import { InvalidCursorError } from '@bumperline/db/errors';
 import { buildAuthConfig } from './auth/auth-config.ts';
 import { loadActor } from './auth/load-actor.ts';
 import { SignInLimiter } from './auth/sign-in-limiter.ts';
@@ -23,7 +22,6 @@ import { ValidationError } from './http/errors.ts';
 import type { Mailer } from './services/mailer.ts';
 import { accountRouter } from './routes/account.ts';
 import { activityRouter, companyRouter } from './routes/company.ts';
-import { devRouter } from './routes/dev.ts';
 import { gamesRouter, modelsRouter } from './routes/games.ts';
 import { healthRouter } from './routes/health.ts';
 import { invitationsRouter, teamRouter } from './routes/team.ts';
@@ -33,10 +31,8 @@ import { settingsRouter } from './routes/settings.ts';
 import { venueViewRouter } from './routes/venue-view.ts';
 import type { PhotoStore } from './services/photo-store.ts';
 import { smsWebhookRouter } from './routes/sms-webhook.ts';
-import { devPhoneRouter } from './routes/dev-phone.ts';
 import { publicTagsRouter } from './routes/public-tags.ts';
 import { tagSheetRouter } from './routes/tag-sheet.ts';
-import type { SmsFake } from '@bumperline/fakes/sms/sms-fake';
 
 export interface AppDeps {
   db: Db;
@@ -44,8 +40,8 @@ export interface AppDeps {
   logger: Logger;
   authSecret: string;
   appOrigin: string;
-  /** Demo mode only: the fakes standing in for the mail server and SMS provider, shown at /dev (loopback only). */
-  devPages?: { mail?: MailFake; sms?: SmsFake };
+  /** Demo mode only (startup/demo.ts): the pages showing the fakes' mail and texts, mounted at /dev for loopback only. */
+  devPages?: Router;
   /** Express "trust proxy": which proxies' X-Forwarded-For to believe for the client address (rate limits). */
   trustProxy?: boolean | number | string;
   /** The built web app (vite build) to serve, in production. */
@@ -126,8 +122,7 @@ export function createApp(deps: AppDeps): Express {
   api.use(notFoundHandler);
   app.use('/api', api);
 
-  if (deps.devPages?.mail) app.use('/dev', loopbackOnly, devRouter(deps.devPages.mail));
-  if (deps.devPages?.sms) app.use('/dev', loopbackOnly, devPhoneRouter(deps.devPages.sms));
+  if (deps.devPages) app.use('/dev', loopbackOnly, deps.devPages);
 
   if (deps.webDist && existsSync(path.join(deps.webDist, 'index.html'))) {
     const index = path.join(deps.webDist, 'index.html');

@@ -7,9 +7,6 @@ import { fileURLToPath } from 'node:url';
 import { startCluster, type Cluster } from '@bumperline/db/lifecycle/cluster';
 import { provisionDatabase } from '@bumperline/db/lifecycle/provision';
 import { createDb } from '@bumperline/db/client';
-import { seedDemo } from '@bumperline/db/demo/seed';
-import { startMailFake, type MailFake } from '@bumperline/fakes/mail/mail-fake';
-import { startSmsFake, type SmsFake } from '@bumperline/fakes/sms/sms-fake';
 import { createApp } from './app.ts';
 import { MissingSettingsError, readEnv, type Env } from './env.ts';
 import { createLogger } from './http/logger.ts';
@@ -17,7 +14,6 @@ import { createMailer } from './services/mailer.ts';
 import { folderPhotoStore } from './services/photo-store.ts';
 import { createSmsSender } from './services/sms.ts';
 import { startJobs } from './jobs/scheduler.ts';
-import { installationSecrets } from './startup/installation-secrets.ts';
 
 let env: Env;
 try {
@@ -37,44 +33,28 @@ const adminUrl = env.DATABASE_URL ?? (cluster = await startCluster({ mode: env.D
 const urls = await provisionDatabase(adminUrl, env.DATABASE_NAME);
 logger.info(`database "${urls.database}" migrated`);
 
-if (demo) {
-  const ownerDb = createDb(urls.ownerUrl, { max: 2 });
-  const seeded = await seedDemo(ownerDb);
-  logger.info(seeded ? 'demo data seeded' : 'demo data already present');
-  await ownerDb.$client.end();
-}
-
-// Demo: secrets made for this installation, and the fakes that stand in for the mail server and SMS provider.
-const secrets = env.mode === 'demo' ? installationSecrets(dataDir) : undefined;
-const authSecret = env.mode === 'demo' ? (env.authSecret ?? secrets!.authSecret) : env.authSecret;
-const sms =
+// Demo only: its data, fakes and developer pages, loaded on demand so a production start never loads a fake.
+const demoKit =
   env.mode === 'demo'
-    ? { accountSid: 'AC' + secrets!.smsAuthToken.slice(0, 32), authToken: secrets!.smsAuthToken, from: '+13125550199' }
-    : env.twilio;
-let mailFake: MailFake | undefined;
-let smsFake: SmsFake | undefined;
-if (demo) {
-  mailFake = await startMailFake();
-  smsFake = await startSmsFake({
-    authToken: sms.authToken,
-    accountSid: sms.accountSid,
-    number: sms.from,
-    webhookUrl: `${env.appOrigin}/webhooks/sms/inbound`,
-    statusCallbackUrl: `${env.appOrigin}/webhooks/sms/status`,
-    // Webhooks are signed for the public address but delivered straight to this process (no dev proxy in between).
-    deliverTo: `http://${env.HOST}:${env.PORT}`,
-  });
-}
+    ? await (
+        await import('./startup/demo.ts')
+      ).startDemo({
+        ownerUrl: urls.ownerUrl,
+        dataDir,
+        appOrigin: env.appOrigin,
+        listenUrl: `http://${env.HOST}:${env.PORT}`,
+        authSecret: env.authSecret,
+        logger,
+      })
+    : undefined;
+const authSecret = env.mode === 'demo' ? demoKit!.authSecret : env.authSecret;
+const sms = env.mode === 'demo' ? demoKit!.sms : env.twilio;
 const mailer = createMailer({
   smtpUrl: env.mode === 'production' ? env.smtpUrl : undefined,
-  fakePort: mailFake?.port,
+  fakePort: demoKit?.mailFakePort,
   from: env.MAIL_FROM,
 });
-const smsSender = createSmsSender({
-  ...sms,
-  fakeUrl: smsFake?.url,
-  statusCallbackUrl: `${env.appOrigin}/webhooks/sms/status`,
-});
+const smsSender = createSmsSender({ ...sms, statusCallbackUrl: `${env.appOrigin}/webhooks/sms/status` });
 const db = createDb(urls.appUrl, { max: 20 });
 const app = createApp({
   db,
@@ -85,7 +65,7 @@ const app = createApp({
   trustProxy: env.TRUST_PROXY,
   webDist: path.join(repoRoot, 'dist/web'),
   smsAuthToken: sms.authToken,
-  ...(mailFake && smsFake ? { devPages: { mail: mailFake, sms: smsFake } } : {}),
+  ...(demoKit ? { devPages: demoKit.devPages } : {}),
   photos: folderPhotoStore(env.UPLOADS_DIR ?? path.join(dataDir, 'uploads')),
 });
 
@@ -116,9 +96,8 @@ async function shutdown(signal: string) {
   logger.info(`${signal}: stopping`);
   server.close();
   jobs.stop();
-  await smsFake?.stop();
   await db.$client.end().catch(() => {});
-  await mailFake?.stop();
+  await demoKit?.stop();
   cluster?.stop();
   process.exit(0);
 }

@@ -1,5 +1,7 @@
+// The account: signing up, confirming an address, resetting a password, and who is signed in.
 import { z } from 'zod';
 import { requiredText, uuid } from './common.ts';
+import { currency, ianaZone } from './company.ts';
 import { roles } from './roles.ts';
 
 export const email = z
@@ -12,22 +14,6 @@ export const password = z
   .min(10, { error: 'must be at least 10 characters' })
   .max(200, { error: 'must be at most 200 characters' });
 
-const ianaZone = z.string().refine(
-  (tz) => {
-    try {
-      new Intl.DateTimeFormat('en', { timeZone: tz });
-      return true;
-    } catch {
-      return false;
-    }
-  },
-  { error: 'must be an IANA time zone such as America/Chicago' },
-);
-const currency = z
-  .string()
-  .regex(/^[A-Z]{3}$/, { error: 'must be an ISO 4217 code such as USD' })
-  .refine((c) => Intl.supportedValuesOf('currency').includes(c), { error: 'is not an ISO 4217 currency' });
-
 export const signUpInput = z.strictObject({
   companyName: requiredText(120),
   name: requiredText(120),
@@ -38,13 +24,6 @@ export const signUpInput = z.strictObject({
 });
 export type SignUpInput = z.input<typeof signUpInput>;
 
-export const companyUpdate = z.strictObject({
-  name: requiredText(120).optional(),
-  timeZone: ianaZone.optional(),
-  currency: currency.optional(),
-  locale: z.string().min(2).max(20).optional(),
-});
-
 export const passwordResetRequest = z.strictObject({ email });
 const emailedToken = z.string().min(20, { error: 'is not a link we sent' }).max(200, { error: 'is not a link we sent' });
 export const passwordResetConfirm = z.strictObject({ token: emailedToken, password });
@@ -53,6 +32,11 @@ export const verifyEmailInput = z.strictObject({ token: emailedToken });
 
 /** What sign-up answers, whether or not the address already has an account. */
 export const signUpAnswer = { status: 'check-your-email' } as const;
+export const signUpAnswered = z.strictObject({ status: z.literal(signUpAnswer.status) });
+export type SignUpAnswered = z.infer<typeof signUpAnswered>;
+/** What the e-mail forms (reset, sign-in link, resend confirmation) answer, whether or not the address has an account. */
+export const mailSentIfKnown = z.strictObject({ status: z.literal('sent-if-known') });
+export type MailSentIfKnown = z.infer<typeof mailSentIfKnown>;
 
 /**
  * Why a password sign-in was refused, beyond a wrong e-mail or password (Auth.js's `credentials`); the
@@ -63,19 +47,14 @@ export const signUpAnswer = { status: 'check-your-email' } as const;
 export const signInRefusals = ['unverified', 'account-paused', 'too-many-attempts'] as const;
 export type SignInRefusal = (typeof signInRefusals)[number];
 
-export const invitationInput = z.strictObject({ email, role: z.enum(roles) });
-export type InvitationInput = z.input<typeof invitationInput>;
-export const acceptInvitationInput = z.strictObject({
-  name: requiredText(120).optional(),
-  password: password.optional(),
-});
 export const switchCompanyInput = z.strictObject({ tenantId: uuid });
-export const memberRoleUpdate = z.strictObject({ role: z.enum(roles) });
 
-export interface Me {
-  user: { id: string; email: string; name: string };
-  company: { id: string; name: string; timeZone: string; currency: string; locale: string } | null;
-  role: (typeof roles)[number] | null;
-  companies: { id: string; name: string; role: (typeof roles)[number] }[];
-  isPlatformAdmin: boolean;
-}
+/** Who is signed in, the company they work in now (none before they join one) and their role there. */
+export const me = z.strictObject({
+  user: z.strictObject({ id: uuid, email: z.string(), name: z.string() }),
+  company: z.strictObject({ id: uuid, name: z.string(), timeZone: z.string(), currency: z.string(), locale: z.string() }).nullable(),
+  role: z.enum(roles).nullable(),
+  companies: z.array(z.strictObject({ id: uuid, name: z.string(), role: z.enum(roles) })),
+  isPlatformAdmin: z.boolean(),
+});
+export type Me = z.infer<typeof me>;

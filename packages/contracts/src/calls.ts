@@ -1,6 +1,7 @@
-// Service calls: the shared words, the state machine and the request shapes.
+// Service calls: the shared words, the state machine, the request shapes and the responses.
 import { z } from 'zod';
-import { listQueryBase, rowVersion, shortText, uuid } from './common.ts';
+import { isoDateTime, listQueryBase, pageOf, rowVersion, shortText, uuid } from './common.ts';
+import { gameKinds } from './games.ts';
 import { phoneNumber } from './phone.ts';
 
 export const problemKinds = ['dead', 'no_credit', 'ball_stuck', 'no_sound', 'display_out', 'other'] as const;
@@ -54,7 +55,6 @@ export const callStateLabels: Record<CallState, string> = {
   closed: 'Closed',
   cancelled: 'Cancelled',
 };
-export const openCallStates: readonly CallState[] = ['reported', 'assigned', 'on_the_way', 'on_site', 'waiting_parts', 'at_shop', 'fixed'];
 
 /**
  * Which state may follow which. Assignment itself (reported → assigned, and back) goes through
@@ -74,6 +74,30 @@ export const transitions: Record<CallState, readonly CallState[]> = {
 
 export function canTransition(from: CallState, to: CallState): boolean {
   return transitions[from].includes(to);
+}
+
+/** States with no way out: the call is over. */
+const finishedStates = callStates.filter((s) => transitions[s].length === 0);
+
+/**
+ * The groups of states the product reasons with, each said once, beside the transition table they
+ * follow from. Queries, jobs, services and screens use these; none lists states of its own.
+ */
+export const callStateGroups = {
+  /** Not over yet (a fixed call still waits to be closed): the dispatch list. */
+  open: callStates.filter((s) => !finishedStates.includes(s)),
+  /** The game still waits for its fix: it stays down, and a new report of it joins the call. */
+  unfixed: callStates.filter((s) => !finishedStates.includes(s) && s !== 'fixed'),
+  /** Nobody has reached the game yet: the response target is running and the assignment may change. */
+  awaitingArrival: ['reported', 'assigned', 'on_the_way'],
+  /** On a technician's plate: counts towards their load when calls are handed out. */
+  technicianLoad: ['assigned', 'on_the_way', 'on_site', 'waiting_parts'],
+  /** The reporter (when they asked for texts) hears of a move into these. */
+  reporterNotified: ['on_the_way', 'on_site', 'at_shop', 'fixed', 'closed', 'cancelled'],
+} as const satisfies Record<string, readonly CallState[]>;
+
+export function inStateGroup(group: keyof typeof callStateGroups, state: CallState): boolean {
+  return (callStateGroups[group] as readonly CallState[]).includes(state);
 }
 
 /** Public report from a game tag (no sign-in). */
@@ -108,6 +132,8 @@ export const assignInput = z.strictObject({
 });
 export const severityInput = z.strictObject({ severity: z.enum(severities), version: rowVersion });
 export const noteInput = z.strictObject({ note: shortText(2000).min(1, { error: 'is required' }) });
+/** The assigned technician's answer to an assignment, from the app (an SMS reply does the same). */
+export const answerInput = z.strictObject({ accept: z.boolean() });
 
 export const callListQuery = listQueryBase.extend({
   sort: z.enum(['openedAt', 'targetAt']).default('targetAt'),
@@ -119,43 +145,125 @@ export const callListQuery = listQueryBase.extend({
 });
 export type CallListQuery = z.input<typeof callListQuery>;
 
-export interface ServiceCall {
-  id: string;
-  ref: string;
-  gameId: string;
-  gameTitle: string;
-  gameSerial: string;
-  gameKind: string;
-  venueId: string | null;
-  venueName: string | null;
-  latitude: number | null;
-  longitude: number | null;
-  problem: ProblemKind;
-  severity: Severity;
-  state: CallState;
-  source: 'game_tag' | 'venue_view' | 'staff';
-  note: string;
-  technicianId: string | null;
-  technicianName: string | null;
-  acceptedAt: string | null;
-  openedAt: string;
-  targetAt: string;
-  fixedAt: string | null;
-  closedAt: string | null;
-  version: number;
-  reporterWantsSms: boolean;
-}
+export const callSources = ['game_tag', 'venue_view', 'staff'] as const;
 
-export interface CallEvent {
-  id: string;
-  at: string;
-  kind: string;
-  actorName: string | null;
-  actorLabel: string;
-  fromState: CallState | null;
-  toState: CallState | null;
-  detail: Record<string, unknown>;
-}
+/** A call as staff see it: in the dispatch list, on its page, and after each change. */
+export const serviceCall = z.strictObject({
+  id: uuid,
+  gameId: uuid,
+  gameTitle: z.string(),
+  gameSerial: z.string(),
+  gameKind: z.enum(gameKinds),
+  venueId: uuid.nullable(),
+  venueName: z.string().nullable(),
+  latitude: z.number().nullable(),
+  longitude: z.number().nullable(),
+  problem: z.enum(problemKinds),
+  severity: z.enum(severities),
+  state: z.enum(callStates),
+  source: z.enum(callSources),
+  note: z.string(),
+  technicianId: uuid.nullable(),
+  technicianName: z.string().nullable(),
+  acceptedAt: isoDateTime.nullable(),
+  openedAt: isoDateTime,
+  targetAt: isoDateTime,
+  fixedAt: isoDateTime.nullable(),
+  closedAt: isoDateTime.nullable(),
+  version: z.number().int(),
+  /** The reporter asked for text updates and left a number (the number itself never leaves the API). */
+  reporterWantsSms: z.boolean(),
+});
+export type ServiceCall = z.infer<typeof serviceCall>;
+export const callPage = pageOf(serviceCall);
+export type CallPage = z.infer<typeof callPage>;
+/** A call opened by staff: `joined` when the report joined a call already open on the game. */
+export const openedCall = serviceCall.extend({ joined: z.boolean() });
+export type OpenedCall = z.infer<typeof openedCall>;
+
+/** One entry of a call's timeline. */
+export const callEvent = z.strictObject({
+  id: uuid,
+  at: isoDateTime,
+  kind: z.string(),
+  actorName: z.string().nullable(),
+  actorLabel: z.string(),
+  fromState: z.enum(callStates).nullable(),
+  toState: z.enum(callStates).nullable(),
+  detail: z.record(z.string(), z.unknown()),
+});
+export type CallEvent = z.infer<typeof callEvent>;
+
+/** A text or e-mail sent about the call; `toAddress` is masked for those without `calls:contacts`. */
+export const callMessage = z.strictObject({
+  id: uuid,
+  channel: z.enum(['sms', 'email']),
+  toAddress: z.string(),
+  subject: z.string(),
+  body: z.string(),
+  status: z.string(),
+  providerStatus: z.string().nullable(),
+  createdAt: isoDateTime,
+  sentAt: isoDateTime.nullable(),
+});
+export type CallMessage = z.infer<typeof callMessage>;
+
+/** A photo sent with a report: its file is fetched from /api/calls/:id/photos/:photoId. */
+export const callPhoto = z.strictObject({
+  id: uuid,
+  width: z.number().int(),
+  height: z.number().int(),
+  createdAt: isoDateTime,
+  uploadedBy: z.string(),
+});
+export type CallPhoto = z.infer<typeof callPhoto>;
+
+export const callDetail = z.strictObject({
+  call: serviceCall,
+  events: z.array(callEvent),
+  messages: z.array(callMessage),
+  photos: z.array(callPhoto),
+});
+export type CallDetail = z.infer<typeof callDetail>;
+
+export const noteAdded = z.strictObject({ ok: z.literal(true) });
+export type NoteAdded = z.infer<typeof noteAdded>;
+
+/** A technician of the company, with their home base and open load (for dispatchers). */
+export const technician = z.strictObject({
+  userId: uuid,
+  name: z.string(),
+  phone: z.string().nullable(),
+  skills: z.array(z.string()),
+  homeLatitude: z.number().nullable(),
+  homeLongitude: z.number().nullable(),
+  openCalls: z.number().int(),
+});
+export type Technician = z.infer<typeof technician>;
+export const technicianList = z.strictObject({ items: z.array(technician) });
+export type TechnicianList = z.infer<typeof technicianList>;
+
+/** A technician ranked for one call; `rank` is null when the call or the technician has no location. */
+export const rankedTechnician = z.strictObject({
+  userId: uuid,
+  name: z.string(),
+  skills: z.array(z.string()),
+  openCalls: z.number().int(),
+  hasPhone: z.boolean(),
+  rank: z
+    .strictObject({
+      id: uuid,
+      score: z.number(),
+      distanceKm: z.number(),
+      excluded: z.boolean(),
+      missingSkills: z.array(z.string()),
+      reasons: z.array(z.string()),
+    })
+    .nullable(),
+});
+export type RankedTechnician = z.infer<typeof rankedTechnician>;
+export const rankedTechnicianList = z.strictObject({ items: z.array(rankedTechnician) });
+export type RankedTechnicianList = z.infer<typeof rankedTechnicianList>;
 
 /** A call's short reference, as read out on the phone and shown in SMS. */
 export function callRef(id: string): string {

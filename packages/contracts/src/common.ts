@@ -21,15 +21,19 @@ export const int4 = () =>
 /** The version an edit started from (optimistic concurrency). */
 export const rowVersion = int4().min(1, { error: 'must be at least 1' });
 
-/** RFC 9457 problem details, with our field-level errors. */
-export interface ProblemDetails {
-  type: string;
-  title: string;
-  status: number;
-  detail?: string;
-  instance?: string;
-  errors?: { field: string; message: string }[];
-}
+/**
+ * RFC 9457 problem details, with our field-level errors: what every refused request answers. Not strict:
+ * the RFC allows extension members (a 409 carries the row as it now is in `current`).
+ */
+export const problemDetails = z.object({
+  type: z.string(),
+  title: z.string(),
+  status: z.number().int(),
+  detail: z.string().optional(),
+  instance: z.string().optional(),
+  errors: z.array(z.strictObject({ field: z.string(), message: z.string() })).optional(),
+});
+export type ProblemDetails = z.infer<typeof problemDetails>;
 
 /** Query string of every list endpoint: search, sort, keyset cursor, page size. */
 export const listQueryBase = z.strictObject({
@@ -43,7 +47,10 @@ export const listQueryBase = z.strictObject({
     .optional(),
 });
 
-export interface Page<T> {
-  items: T[];
-  nextCursor: string | null;
-}
+/** The response of a list endpoint: one page of `item`s and the cursor of the next page (null on the last). */
+export const pageOf = <T extends z.ZodType>(item: T) => z.strictObject({ items: z.array(item), nextCursor: z.string().nullable() });
+
+/** A moment as the API sends it: a Date becomes an ISO 8601 string in JSON (UTC, `Z`). */
+export const isoDateTime = z.iso.datetime({ offset: true });
+/** A calendar date as the API sends it (PostgreSQL `date`): YYYY-MM-DD. */
+export const isoDate = z.iso.date({ error: 'must be a date as YYYY-MM-DD' });

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { listQueryBase, requiredText, rowVersion, shortText, uuid } from './common.ts';
+import { isoDate, isoDateTime, listQueryBase, pageOf, requiredText, rowVersion, shortText, uuid } from './common.ts';
 
 export const gameKinds = ['pinball', 'video', 'jukebox', 'darts', 'other'] as const;
 export const gameKindLabels: Record<(typeof gameKinds)[number], string> = {
@@ -27,15 +27,16 @@ export const gameModelInput = z.strictObject({
 });
 export type GameModelInput = z.input<typeof gameModelInput>;
 
-export interface GameModel {
-  id: string;
-  maker: string;
-  title: string;
-  kind: (typeof gameKinds)[number];
-  year: number | null;
-}
-
-const isoDate = z.iso.date({ error: 'must be a date as YYYY-MM-DD' });
+export const gameModel = z.strictObject({
+  id: uuid,
+  maker: z.string(),
+  title: z.string(),
+  kind: z.enum(gameKinds),
+  year: z.number().int().nullable(),
+});
+export type GameModel = z.infer<typeof gameModel>;
+export const gameModelList = z.strictObject({ items: z.array(gameModel) });
+export type GameModelList = z.infer<typeof gameModelList>;
 
 export const gameInput = z.strictObject({
   modelId: uuid,
@@ -60,21 +61,47 @@ export const gameListQuery = listQueryBase.extend({
 });
 export type GameListQuery = z.input<typeof gameListQuery>;
 
-export interface Game {
-  id: string;
-  modelId: string;
-  venueId: string | null;
-  serial: string;
-  status: GameStatus;
-  installedOn: string | null;
-  pricePerPlayCents: number;
-  notes: string;
-  version: number;
-  createdAt: string;
-  updatedAt: string;
-  retiredAt: string | null;
-  model: GameModel;
-  venueName: string | null;
-  /** Only on a single game's page: the secret in its game tag's address (/t/<token>). */
-  tagToken?: string;
-}
+export const game = z.strictObject({
+  id: uuid,
+  modelId: uuid,
+  venueId: uuid.nullable(),
+  serial: z.string(),
+  status: z.enum(gameStatuses),
+  installedOn: isoDate.nullable(),
+  pricePerPlayCents: z.number().int(),
+  notes: z.string(),
+  version: z.number().int(),
+  createdAt: isoDateTime,
+  updatedAt: isoDateTime,
+  retiredAt: isoDateTime.nullable(),
+  model: gameModel,
+  venueName: z.string().nullable(),
+});
+export type Game = z.infer<typeof game>;
+export const gamePage = pageOf(game);
+export type GamePage = z.infer<typeof gamePage>;
+/** A single game's page also carries the secret in its game tag's address (/t/<token>); lists never do. */
+export const gameDetail = game.extend({ tagToken: z.string() });
+export type GameDetail = z.infer<typeof gameDetail>;
+
+/** How many active games are in each status (a status with none is left out). */
+export const gameSummary = z.strictObject({
+  byStatus: z.partialRecord(z.enum(gameStatuses), z.number().int()),
+  total: z.number().int(),
+});
+export type GameSummary = z.infer<typeof gameSummary>;
+
+/** When a game was down; an open interval has no end yet. */
+export const downtimeInterval = z.strictObject({
+  id: uuid,
+  callId: uuid.nullable(),
+  startedAt: isoDateTime,
+  endedAt: isoDateTime.nullable(),
+});
+export type DowntimeInterval = z.infer<typeof downtimeInterval>;
+export const downtimeList = z.strictObject({ items: z.array(downtimeInterval) });
+export type DowntimeList = z.infer<typeof downtimeList>;
+
+/** A new game tag: the address the new QR code opens (the printed one stops working). */
+export const tagRegenerated = z.strictObject({ gameId: uuid, tagUrl: z.url() });
+export type TagRegenerated = z.infer<typeof tagRegenerated>;

@@ -18,6 +18,8 @@ export const permissions = {
   'models:write': ['owner', 'dispatcher'],
   'team:read': ['owner', 'dispatcher'],
   'team:manage': ['owner'],
+  /** The company's own record (name, time zone, currency): every staff role reads it. */
+  'company:read': ['owner', 'dispatcher', 'technician'],
   'company:manage': ['owner'],
   'audit:read': ['owner'],
   'calls:read': ['owner', 'dispatcher', 'technician'],

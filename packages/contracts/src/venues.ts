@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { listQueryBase, requiredText, rowVersion, shortText } from './common.ts';
+import { isoDateTime, listQueryBase, pageOf, requiredText, rowVersion, shortText, uuid } from './common.ts';
 
 const hhmm = z.string().regex(/^([01]\d|2[0-3]):[0-5]\d$/, { error: 'must be a time as HH:MM' });
 const dayHours = z.array(z.strictObject({ open: hhmm, close: hhmm })).max(4);
@@ -41,22 +41,38 @@ export const venueSort = z.enum(['name', 'city', 'createdAt']);
 export const venueListQuery = listQueryBase.extend({ sort: venueSort.default('name') });
 export type VenueListQuery = z.input<typeof venueListQuery>;
 
-export interface Venue {
-  id: string;
-  name: string;
-  addressLine: string;
-  city: string;
-  postcode: string;
-  latitude: number;
-  longitude: number;
-  openingHours: z.infer<typeof openingHours>;
-  contactName: string;
-  contactPhone: string;
-  contactEmail: string;
-  notes: string;
-  version: number;
-  createdAt: string;
-  updatedAt: string;
-  retiredAt: string | null;
-  gameCount: number;
-}
+export const venue = z.strictObject({
+  id: uuid,
+  name: z.string(),
+  addressLine: z.string(),
+  city: z.string(),
+  postcode: z.string(),
+  latitude: z.number(),
+  longitude: z.number(),
+  openingHours,
+  contactName: z.string(),
+  contactPhone: z.string(),
+  contactEmail: z.string(),
+  notes: z.string(),
+  version: z.number().int(),
+  createdAt: isoDateTime,
+  updatedAt: isoDateTime,
+  retiredAt: isoDateTime.nullable(),
+  /** Active games at the venue. */
+  gameCount: z.number().int(),
+});
+export type Venue = z.infer<typeof venue>;
+export const venuePage = pageOf(venue);
+export type VenuePage = z.infer<typeof venuePage>;
+
+/** Linking a venue contact (a member whose role is venue contact) to a venue. */
+export const venueContactInput = z.strictObject({ userId: uuid });
+
+export const venueContactPerson = z.strictObject({ userId: uuid, name: z.string(), email: z.string() });
+export type VenueContactPerson = z.infer<typeof venueContactPerson>;
+/** The venue's contacts, and the company's venue contacts who could be linked to it. */
+export const venueContactList = z.strictObject({ items: z.array(venueContactPerson), candidates: z.array(venueContactPerson) });
+export type VenueContactList = z.infer<typeof venueContactList>;
+/** After linking: the venue's contacts. */
+export const venueContactsLinked = z.strictObject({ items: z.array(venueContactPerson) });
+export type VenueContactsLinked = z.infer<typeof venueContactsLinked>;

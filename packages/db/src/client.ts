@@ -19,6 +19,11 @@ export function createDb(url: string, options: { max?: number } = {}): Db {
   return drizzle(pool, { schema }) as Db;
 }
 
+/** Resolves once the database answers; rejects while it cannot be reached. */
+export async function pingDatabase(db: Db): Promise<void> {
+  await db.execute(sql`select 1`);
+}
+
 export interface Scope {
   tenantId?: string | null;
   userId?: string | null;

@@ -37,14 +37,6 @@ export function requireNonNegativeInteger(value: unknown, field: string): number
   return n;
 }
 
-export function requirePositiveInteger(value: unknown, field: string): number {
-  const n = requireInteger(value, field);
-  if (n <= 0) {
-    throw new DomainError(n < 0 ? 'negative' : 'out-of-range', `${field} must be at least 1 (got ${n})`, field);
-  }
-  return n;
-}
-
 export function requireInRange(value: unknown, min: number, max: number, field: string): number {
   const n = requireFinite(value, field);
   if (n < min || n > max) {

@@ -3,10 +3,8 @@
 // which is what makes sign-out and removal from a company take effect at once.
 import type { ExpressAuthConfig } from '@auth/express';
 import Credentials from '@auth/express/providers/credentials';
-import { eq } from 'drizzle-orm';
 import type { Db } from '@bumperline/db/client';
-import { createSession, revokeSession } from '@bumperline/db/queries/identity';
-import { users } from '@bumperline/db/schema/index';
+import { createSession, findUserById, revokeSession } from '@bumperline/db/queries/identity';
 import { consumeEmailToken } from '@bumperline/db/queries/email-tokens';
 import { recordEmailProof } from '@bumperline/db/queries/email-proof';
 import type { SignInLimiter } from './sign-in-limiter.ts';
@@ -50,8 +48,7 @@ export function buildAuthConfig(opts: { db: Db; secret: string; secureCookies: b
             if (!userId) return undefined;
             // The first proof of the address drops a password chosen before it (see email-proof.ts).
             await recordEmailProof(tx, userId, { keepPassword: false });
-            const [u] = await tx.select().from(users).where(eq(users.id, userId));
-            return u;
+            return findUserById(tx, userId);
           });
           if (!user) return null;
           await limiter.addressProven(user.email);

@@ -21,7 +21,8 @@ export async function passwordSignIn(
   attempt: { email: string; password: string; ip: string },
 ): Promise<{ id: string; email: string; name: string } | null> {
   const { email, password, ip } = attempt;
-  if (!email || !password) return null;
+  // Not an address anyone can have (PostgreSQL text cannot even hold a NUL): refused like a wrong password.
+  if (!email || !password || email.length > 254 || email.includes('\u0000')) return null;
   const verdict = await deps.limiter.attempt(email, ip);
   if (verdict !== 'allowed') throw new SignInRefused(verdict);
   const user = await findUserByEmail(deps.db, email);

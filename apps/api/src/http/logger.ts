@@ -99,14 +99,18 @@ export function requestLogger(logger: Logger) {
       res.setHeader('x-request-id', id);
       return id;
     },
+    // Our serializers get the raw objects (wrapped ones would hand serializeError a plain copy of the error).
+    wrapSerializers: false,
     serializers: {
-      req: (req: { method?: string; url?: string; raw?: Req }) => ({ method: req.method, url: redactUrl(req.raw?.originalUrl ?? req.url) }),
-      res: (res: { statusCode?: number }) => ({ status: res.statusCode }),
+      req: (req: Req) => ({ method: req.method, url: redactUrl(req.originalUrl ?? req.url) }),
+      res: (res: ServerResponse) => ({ status: res.statusCode }),
       err: serializeError,
     },
     customSuccessMessage: (req, res, ms) => `${req.method} ${redactUrl(req.originalUrl ?? req.url)} ${res.statusCode} ${Math.round(ms)} ms`,
     customErrorMessage: (req, res) => `${req.method} ${redactUrl(req.originalUrl ?? req.url)} ${res.statusCode} failed`,
     customAttributeKeys: { responseTime: 'ms' },
+    // The failure itself is logged once, by the error handler, with its stack; the request line stays short.
+    customErrorObject: (_req, _res, _err, val: { err?: unknown }) => ({ ...val, err: undefined }),
     autoLogging: { ignore: (req) => req.url === '/api/health' },
   };
   return pinoHttp(options);

@@ -2,7 +2,8 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import type { ProblemDetails } from '@bumperline/contracts/common';
 import { redactUrl } from './logger.ts';
-import { ConflictError, HttpError, NotFoundError, ServiceUnavailableError } from './errors.ts';
+import { Conflict, InvalidInput, NotAllowed, NotFound } from '../services/workflow-errors.ts';
+import { ConflictError, ForbiddenError, HttpError, NotFoundError, ServiceUnavailableError, ValidationError } from './errors.ts';
 
 export function sendProblem(res: Parameters<RequestHandler>[1], problem: ProblemDetails & Record<string, unknown>) {
   res.status(problem.status).type('application/problem+json').json(problem);
@@ -27,9 +28,20 @@ export const notFoundHandler: RequestHandler = (req) => {
   throw new NotFoundError(`route ${req.method} ${req.path}`);
 };
 
+/** A workflow's refusal (services/workflow-errors.ts) as the HTTP error it means. */
+function fromWorkflow(err: unknown): HttpError | undefined {
+  if (err instanceof NotFound) return new NotFoundError(err.what);
+  if (err instanceof InvalidInput) return new ValidationError(err.fields);
+  if (err instanceof NotAllowed) return new ForbiddenError(err.message);
+  if (err instanceof Conflict) return new ConflictError(err.message, err.current);
+  return undefined;
+}
+
 export const problemHandler: ErrorRequestHandler = (err, req, res, _next) => {
   let e: HttpError;
+  const workflow = fromWorkflow(err);
   if (err instanceof HttpError) e = err;
+  else if (workflow) e = workflow;
   else if ((err as { type?: string }).type === 'entity.parse.failed') {
     e = new HttpError(
       400,
@@ -38,6 +50,9 @@ export const problemHandler: ErrorRequestHandler = (err, req, res, _next) => {
       [{ field: '(body)', message: 'is not valid JSON' }],
       'malformed',
     );
+  } else if (err instanceof URIError) {
+    // A path with broken percent-encoding (/status/%E0%A4%A) fails to decode before any route runs.
+    e = new HttpError(400, 'Malformed URL', 'The address is not valid.', [{ field: '(path)', message: 'is not a valid URL' }], 'malformed');
   } else if ((err as { type?: string }).type === 'entity.too.large') {
     e = new HttpError(413, 'Request too large', 'The request body is too large.', undefined, 'too-large');
   } else if (isDatabaseDown(err)) e = new ServiceUnavailableError();

@@ -4,11 +4,17 @@
 // failed, or blocked for numbers that opted out. Never lost: a row left 'sending' by a process that died
 // mid-send is picked up again. Never sent twice: before sending such a row again, the provider's own
 // message list is checked for it.
-import { and, eq, sql } from 'drizzle-orm';
 import type { Logger } from 'pino';
 import { withScope, type Db, type Tx } from '@bumperline/db/client';
-import { outbox, smsOptOuts } from '@bumperline/db/schema/index';
-import { currentTenant, tenantMatches } from '@bumperline/db/schema/rls';
+import { listTenantIds } from '@bumperline/db/queries/companies';
+import {
+  claimDueMessages,
+  findMessagesByProviderId,
+  markClaimSent,
+  updateClaim,
+  type ClaimedMessage as Claimed,
+} from '@bumperline/db/queries/outbox';
+import { recordProviderOptOut } from '@bumperline/db/queries/sms-opt-outs';
 import type { Mailer } from '../services/mailer.ts';
 import { SmsError, toSmsError, type SmsSender } from '../services/sms.ts';
 
@@ -43,19 +49,6 @@ export function retryDelayMs(attempts: number): number {
   return Math.min(2 ** Math.max(attempts - 1, 0), 60) * 60_000;
 }
 
-interface Claimed {
-  id: string;
-  channel: 'sms' | 'email';
-  to: string;
-  subject: string;
-  body: string;
-  /** Counting this claim. */
-  attempts: number;
-  /** When it was claimed before, if a dead process left it 'sending'. */
-  stuckSince: Date | null;
-  optedOut: boolean;
-}
-
 type Outcome =
   | { kind: 'sent'; providerId: string | null; providerStatus?: string; recovered?: boolean }
   | { kind: 'retry'; error: string }
@@ -65,8 +58,7 @@ type Outcome =
 
 export async function runOutboxOnce(deps: OutboxDeps, now: Date = new Date()): Promise<OutboxRunSummary> {
   const summary: OutboxRunSummary = { sent: 0, retried: 0, failed: 0, blocked: 0, recovered: 0 };
-  const tenants = await deps.db.execute<{ tenant_id: string }>(sql`select tenant_id from list_tenant_ids()`);
-  for (const { tenant_id: tenantId } of tenants.rows) {
+  for (const tenantId of await listTenantIds(deps.db)) {
     const rows = await withScope(deps.db, { tenantId }, (tx) => claimDue(tx, deps, now));
     for (const row of rows) {
       const outcome = await deliver(deps, row);
@@ -84,49 +76,10 @@ export async function runOutboxOnce(deps: OutboxDeps, now: Date = new Date()): P
   return summary;
 }
 
-/**
- * Due rows and rows stuck in 'sending', locked with SKIP LOCKED so that concurrent workers take
- * different rows, and marked 'sending' (with the attempt counted) before the transaction commits.
- */
+/** Due rows and rows stuck in 'sending' (claimed SKIP LOCKED, so concurrent workers take different rows). */
 async function claimDue(tx: Tx, deps: OutboxDeps, now: Date): Promise<Claimed[]> {
   const stuckBefore = new Date(now.getTime() - (deps.stuckAfterMs ?? DEFAULT_STUCK_AFTER_MS));
-  const result = await tx.execute<{
-    id: string;
-    channel: 'sms' | 'email';
-    to_address: string;
-    subject: string;
-    body: string;
-    attempts: number;
-    was_status: string;
-    was_claimed_at: string | Date | null;
-    opted_out: boolean;
-  }>(sql`
-    with due as (
-      select o.id, o.status as was_status, o.claimed_at as was_claimed_at
-      from outbox o
-      where o.tenant_id = ${currentTenant}
-        and o.next_attempt_at <= ${now}
-        and (o.status = 'pending' or (o.status = 'sending' and o.claimed_at < ${stuckBefore}))
-      order by o.next_attempt_at
-      limit ${deps.batchSize ?? 50}
-      for update skip locked
-    )
-    update outbox o
-    set status = 'sending', claimed_at = ${now}, attempts = o.attempts + 1
-    from due
-    where o.tenant_id = ${currentTenant} and o.id = due.id
-    returning o.id, o.channel, o.to_address, o.subject, o.body, o.attempts, due.was_status, due.was_claimed_at,
-      exists (select 1 from sms_opt_outs s where s.phone = o.to_address) as opted_out`);
-  return result.rows.map((r) => ({
-    id: r.id,
-    channel: r.channel,
-    to: r.to_address,
-    subject: r.subject,
-    body: r.body,
-    attempts: r.attempts,
-    stuckSince: r.was_status === 'sending' && r.was_claimed_at ? new Date(r.was_claimed_at) : null,
-    optedOut: r.opted_out,
-  }));
+  return claimDueMessages(tx, { now, stuckBefore, limit: deps.batchSize ?? 50 });
 }
 
 /** Sends one claimed row, outside any transaction. */
@@ -164,61 +117,45 @@ async function deliver(deps: OutboxDeps, row: Claimed): Promise<Outcome> {
 async function alreadySent(deps: OutboxDeps, row: Claimed, since: Date): Promise<string | undefined> {
   if (!deps.sms.sentSince) return undefined;
   for (const providerId of await deps.sms.sentSince(row.to, row.body, since)) {
-    const owner = await deps.db.execute(sql`select 1 from outbox_by_provider_id(${providerId})`);
-    if (owner.rows.length === 0) return providerId;
+    if ((await findMessagesByProviderId(deps.db, providerId)).length === 0) return providerId;
   }
   return undefined;
 }
 
 /** Writes the outcome, only if this claim still holds the row (same attempt, still 'sending'). */
 async function record(tx: Tx, row: Claimed, outcome: Outcome, now: Date): Promise<void> {
-  const ours = and(tenantMatches(outbox.tenantId), eq(outbox.id, row.id), eq(outbox.status, 'sending'), eq(outbox.attempts, row.attempts));
   switch (outcome.kind) {
     case 'sent':
-      await tx
-        .update(outbox)
-        .set({
-          status: 'sent',
-          providerId: outcome.providerId,
-          // A status callback may have come first; the send's own answer only fills a gap.
-          providerStatus: sql`coalesce(${outbox.providerStatus}, ${outcome.providerStatus ?? null})`,
-          sentAt: now,
-          lastError: null,
-        })
-        .where(ours);
+      await markClaimSent(tx, row, { providerId: outcome.providerId, providerStatus: outcome.providerStatus, sentAt: now });
       return;
     case 'retry': {
       const giveUp = row.attempts >= MAX_ATTEMPTS;
-      await tx
-        .update(outbox)
-        .set(
-          giveUp
-            ? { status: 'failed', lastError: `gave up after ${row.attempts} attempts: ${outcome.error}` }
-            : { status: 'pending', lastError: outcome.error, nextAttemptAt: new Date(now.getTime() + retryDelayMs(row.attempts)) },
-        )
-        .where(ours);
+      await updateClaim(
+        tx,
+        row,
+        giveUp
+          ? { status: 'failed', lastError: `gave up after ${row.attempts} attempts: ${outcome.error}` }
+          : { status: 'pending', lastError: outcome.error, nextAttemptAt: new Date(now.getTime() + retryDelayMs(row.attempts)) },
+      );
       return;
     }
     case 'failed':
-      await tx.update(outbox).set({ status: 'failed', lastError: outcome.error }).where(ours);
+      await updateClaim(tx, row, { status: 'failed', lastError: outcome.error });
       return;
     case 'blocked':
-      await tx.update(outbox).set({ status: 'blocked', lastError: outcome.error }).where(ours);
+      await updateClaim(tx, row, { status: 'blocked', lastError: outcome.error });
       // The provider's word that the number opted out is kept, so later messages stop here.
-      if (row.channel === 'sms') await tx.insert(smsOptOuts).values({ phone: row.to }).onConflictDoNothing();
+      if (row.channel === 'sms') await recordProviderOptOut(tx, row.to);
       return;
     case 'recheck':
       // Still possibly sent: stays 'sending' as it was (the next claim checks again), a little later,
       // and this look does not count as an attempt.
-      await tx
-        .update(outbox)
-        .set({
-          claimedAt: row.stuckSince,
-          attempts: row.attempts - 1,
-          lastError: outcome.error,
-          nextAttemptAt: new Date(now.getTime() + RECHECK_AFTER_MS),
-        })
-        .where(ours);
+      await updateClaim(tx, row, {
+        claimedAt: row.stuckSince,
+        attempts: row.attempts - 1,
+        lastError: outcome.error,
+        nextAttemptAt: new Date(now.getTime() + RECHECK_AFTER_MS),
+      });
       return;
   }
 }

@@ -2,8 +2,8 @@
 // minute, expired rate-limit counters cleared every 10 minutes. Each run first takes a PostgreSQL
 // advisory lock, so with several API instances one runs and the others skip that tick.
 import cron, { type ScheduledTask } from 'node-cron';
-import { sql } from 'drizzle-orm';
 import type { Db } from '@bumperline/db/client';
+import { tryAdvisoryXactLock } from '@bumperline/db/queries/advisory-locks';
 import type { Logger } from 'pino';
 import type { Mailer } from '../services/mailer.ts';
 import type { SmsSender } from '../services/sms.ts';
@@ -39,8 +39,7 @@ export const JOB_LOCKS = {
  */
 export async function runExclusive<T>(db: Db, lockKey: number, fn: () => Promise<T>): Promise<{ ran: true; result: T } | { ran: false }> {
   return db.transaction(async (tx) => {
-    const got = await tx.execute<{ locked: boolean }>(sql`select pg_try_advisory_xact_lock(${lockKey}::bigint) as locked`);
-    if (!got.rows[0]?.locked) return { ran: false as const };
+    if (!(await tryAdvisoryXactLock(tx, lockKey))) return { ran: false as const };
     return { ran: true as const, result: await fn() };
   });
 }

@@ -4,7 +4,6 @@
 // account, and their e-mails are capped per address (AccountMailLimiter).
 import { randomUUID } from 'node:crypto';
 import { Router } from 'express';
-import { eq } from 'drizzle-orm';
 import {
   passwordResetConfirm,
   passwordResetRequest,
@@ -15,8 +14,16 @@ import {
   type Me,
 } from '@bumperline/contracts/auth';
 import { withScope, type Db } from '@bumperline/db/client';
-import { memberships, tenants, users } from '@bumperline/db/schema/index';
-import { findUserByEmail, listCompaniesOf, revokeAllSessionsOf, setActiveCompany } from '@bumperline/db/queries/identity';
+import { createCompany, getCompanySummary } from '@bumperline/db/queries/companies';
+import {
+  findUserByEmail,
+  findUserById,
+  insertUserIfNew,
+  listCompaniesOf,
+  revokeAllSessionsOf,
+  setActiveCompany,
+  updateUser,
+} from '@bumperline/db/queries/identity';
 import { recordEmailProof } from '@bumperline/db/queries/email-proof';
 import { hashPassword } from '@bumperline/db/passwords';
 import { ValidationError } from '../http/errors.ts';
@@ -50,15 +57,10 @@ export function accountRouter(deps: {
     const passwordHash = await hashPassword(input.password);
     const tenantId = randomUUID();
     const userId = await withScope(db, { tenantId }, async (tx) => {
-      const [user] = await tx
-        .insert(users)
-        .values({ email: input.email, name: input.name, passwordHash })
-        .onConflictDoNothing()
-        .returning({ id: users.id });
-      if (!user) return undefined;
-      await tx.insert(tenants).values({ id: tenantId, name: input.companyName, timeZone: input.timeZone, currency: input.currency });
-      await tx.insert(memberships).values({ tenantId, userId: user.id, role: 'owner' });
-      return user.id;
+      const ownerId = await insertUserIfNew(tx, { email: input.email, name: input.name, passwordHash });
+      if (!ownerId) return undefined;
+      await createCompany(tx, { id: tenantId, name: input.companyName, timeZone: input.timeZone, currency: input.currency, ownerId });
+      return ownerId;
     });
     if (await mailLimiter.allow('sign-up', input.email)) {
       if (userId) {
@@ -78,8 +80,7 @@ export function accountRouter(deps: {
       const userId = await consumeEmailToken(tx, token, 'verify-email');
       if (!userId) return undefined;
       await recordEmailProof(tx, userId, { keepPassword: true });
-      const [u] = await tx.select({ email: users.email }).from(users).where(eq(users.id, userId));
-      return u?.email;
+      return (await findUserById(tx, userId))?.email;
     });
     if (!email) throw new ValidationError([{ field: 'token', message: 'is invalid, used or expired: ask for a new link' }]);
     await signInLimiter.addressProven(email);
@@ -103,13 +104,7 @@ export function accountRouter(deps: {
     const actor = requireActor(req);
     const companies = await listCompaniesOf(db, actor.userId);
     const company = actor.tenantId
-      ? await withScope(db, { tenantId: actor.tenantId, userId: actor.userId }, async (tx) => {
-          const [t] = await tx
-            .select({ id: tenants.id, name: tenants.name, timeZone: tenants.timeZone, currency: tenants.currency, locale: tenants.locale })
-            .from(tenants)
-            .where(eq(tenants.id, actor.tenantId!));
-          return t ?? null;
-        })
+      ? ((await withScope(db, { tenantId: actor.tenantId, userId: actor.userId }, (tx) => getCompanySummary(tx, actor.tenantId!))) ?? null)
       : null;
     const me: Me = {
       user: { id: actor.userId, email: actor.email, name: actor.name },
@@ -151,7 +146,7 @@ export function accountRouter(deps: {
     const user = await db.transaction(async (tx) => {
       const usedBy = await consumeEmailToken(tx, token, 'password-reset');
       if (!usedBy) return undefined;
-      const [u] = await tx.update(users).set({ passwordHash }).where(eq(users.id, usedBy)).returning({ id: users.id, email: users.email });
+      const u = await updateUser(tx, usedBy, { passwordHash });
       // The link proves the address; the password was chosen through it, so it is kept.
       await recordEmailProof(tx, usedBy, { keepPassword: true });
       // Whoever had an older link, or a session, had it under the old password: all of them end.

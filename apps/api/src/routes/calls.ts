@@ -1,28 +1,28 @@
 // Service calls for staff: the dispatch list, a call with its timeline, opening, moving, assigning.
 import { Router } from 'express';
-import { assignInput, callListQuery, noteInput, openCallInput, severityInput, transitionInput } from '@bumperline/contracts/calls';
+import {
+  answerInput,
+  assignInput,
+  callListQuery,
+  noteInput,
+  openCallInput,
+  severityInput,
+  transitionInput,
+} from '@bumperline/contracts/calls';
 import { can } from '@bumperline/contracts/roles';
 import { maskAddress } from '@bumperline/contracts/phone';
-import { rankTechnicians } from '@bumperline/domain/routes/technician-ranking';
-import {
-  getCall,
-  getCallRow,
-  getPhoto,
-  insertEvent,
-  listCallMessages,
-  listCalls,
-  listEvents,
-  listPhotos,
-  listTechnicians,
-  updateCall,
-} from '@bumperline/db/queries/calls';
-import { z } from 'zod';
+import { getCall, getCallRow, listCalls, updateCall } from '@bumperline/db/queries/calls';
+import { insertEvent, listEvents } from '@bumperline/db/queries/call-events';
+import { getPhoto, listPhotos } from '@bumperline/db/queries/call-photos';
+import { listCallMessages } from '@bumperline/db/queries/outbox';
+import { listTechnicians } from '@bumperline/db/queries/technicians';
 import { ConflictError, NotFoundError } from '../http/errors.ts';
 import { parse } from '../http/validate.ts';
 import { idParam } from '../http/params.ts';
 import type { makeScoped, TenantActor } from '../http/guards.ts';
 import { answerAssignment, assignCall, openCall, transitionCall, type CallActor } from '../services/service-calls.ts';
 import type { PhotoStore } from '../services/photo-store.ts';
+import { suggestTechnicians } from '../services/technician-suggestions.ts';
 
 const actorOf = (a: TenantActor): CallActor => ({ userId: a.userId, role: a.role, label: a.name });
 
@@ -66,41 +66,10 @@ export function callsRouter(deps: { scoped: ReturnType<typeof makeScoped>; appOr
     }),
   );
 
-  // Technicians ranked for this call by the domain module: distance from their home base, skills, open load.
+  // Technicians ranked for this call: distance from their home base, skills, open load.
   r.get(
     '/:id/technicians',
-    scoped('calls:dispatch', async ({ tx, req }) => {
-      const call = await getCall(tx, idParam(req));
-      if (!call) throw new NotFoundError('service call');
-      const techs = await listTechnicians(tx);
-      const located = techs.filter((t) => t.homeLatitude !== null && t.homeLongitude !== null);
-      const ranks =
-        call.latitude !== null && call.longitude !== null
-          ? rankTechnicians(
-              { location: { lat: call.latitude, lon: call.longitude }, requiredSkills: [call.gameKind] },
-              located.map((t) => ({
-                id: t.userId,
-                location: { lat: t.homeLatitude!, lon: t.homeLongitude! },
-                skills: t.skills,
-                openJobs: t.openCalls,
-                capacity: 6,
-              })),
-              { missingSkill: 'penalise' },
-            )
-          : [];
-      const byId = new Map(ranks.map((x) => [x.id, x]));
-      const items = techs
-        .map((t) => ({
-          userId: t.userId,
-          name: t.name,
-          skills: t.skills,
-          openCalls: t.openCalls,
-          hasPhone: !!t.phone,
-          rank: byId.get(t.userId) ?? null,
-        }))
-        .sort((a, b) => (b.rank?.score ?? -1) - (a.rank?.score ?? -1));
-      return { items };
-    }),
+    scoped('calls:dispatch', ({ tx, req }) => suggestTechnicians(tx, idParam(req))),
   );
 
   r.post(
@@ -122,7 +91,7 @@ export function callsRouter(deps: { scoped: ReturnType<typeof makeScoped>; appOr
   r.post(
     '/:id/answer',
     scoped('calls:work', async ({ tx, req, actor }) => {
-      const { accept } = parse(z.strictObject({ accept: z.boolean() }), req.body);
+      const { accept } = parse(answerInput, req.body);
       return answerAssignment(tx, { callId: idParam(req), technicianId: actor.userId, accept, actor: actorOf(actor) });
     }),
   );

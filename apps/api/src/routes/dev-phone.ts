@@ -2,16 +2,12 @@
 // and received, one conversation per phone number, and a form to text the app as any number (to answer
 // an assignment with YES or NO, or to send STOP). /dev/phone.json gives the same to tests.
 import express, { Router, type RequestHandler } from 'express';
-import { z } from 'zod';
 import type { FakeMessage, SmsFake } from '@bumperline/fakes/sms/sms-fake';
-import { requiredText } from '@bumperline/contracts/common';
-import { phoneNumber } from '@bumperline/contracts/phone';
+import { devPhoneReplyInput } from '@bumperline/contracts/dev-phone';
 import { hostOf } from '../http/csrf.ts';
 import { HttpError } from '../http/errors.ts';
 import { refuseNulBytes } from '../http/nul-bytes.ts';
 import { parse } from '../http/validate.ts';
-
-const replyInput = z.object({ from: phoneNumber, body: requiredText(1600) });
 
 const escapeHtml = (s: string) =>
   s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
@@ -93,7 +89,7 @@ export function devPhoneRouter(fake: SmsFake): Router {
     res.type('html').send(page(req.baseUrl, fake.messages()));
   });
   r.post('/phone/reply', sameOriginOnly, express.urlencoded({ extended: false, limit: '10kb' }), refuseNulBytes, async (req, res) => {
-    const { from, body } = parse(replyInput, req.body ?? {});
+    const { from, body } = parse(devPhoneReplyInput, req.body ?? {});
     await fake.reply(from, body);
     res.redirect(303, `${req.baseUrl}/phone#${anchorOf(from)}`);
   });

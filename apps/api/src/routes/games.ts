@@ -4,7 +4,6 @@ import {
   countGamesByStatus,
   getGame,
   getModel,
-  getTagToken,
   insertGame,
   insertModel,
   listGames,
@@ -14,7 +13,8 @@ import {
 import { getVenue } from '@bumperline/db/queries/venues';
 import { recordAudit } from '@bumperline/db/queries/audit';
 import type { Tx } from '@bumperline/db/client';
-import { listDowntime } from '@bumperline/db/queries/calls';
+import { listDowntime } from '@bumperline/db/queries/downtime';
+import { getTagToken } from '@bumperline/db/queries/game-tags';
 import { ConflictError, NotFoundError, ValidationError } from '../http/errors.ts';
 import { parse } from '../http/validate.ts';
 import { idParam } from '../http/params.ts';

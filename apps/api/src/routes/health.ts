@@ -1,13 +1,12 @@
 import { Router } from 'express';
-import { sql } from 'drizzle-orm';
-import type { Db } from '@bumperline/db/client';
+import { pingDatabase, type Db } from '@bumperline/db/client';
 
 /** Liveness with the database: 503 while it cannot be reached, ok again as soon as it can. */
 export function healthRouter(db: Db): Router {
   const r = Router();
   r.get('/', async (_req, res) => {
     try {
-      await db.execute(sql`select 1`);
+      await pingDatabase(db);
       res.json({ status: 'ok', db: 'ok' });
     } catch {
       res.status(503).type('application/problem+json').json({

@@ -7,13 +7,14 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { Router, type Request, type Response } from 'express';
 import { rateLimit, type Options as RateLimitOptions } from 'express-rate-limit';
-import { eq, sql } from 'drizzle-orm';
 import type { z } from 'zod';
 import { callRef, problemLabels, publicReportInput, type CallState } from '@bumperline/contracts/calls';
 import { withScope, type Db } from '@bumperline/db/client';
-import { getCall, getCallRow, listEvents } from '@bumperline/db/queries/calls';
-import { tenants } from '@bumperline/db/schema/index';
-import { ValidationError } from '../http/errors.ts';
+import { findCallByStatusToken, getCall, getCallRow } from '@bumperline/db/queries/calls';
+import { listEvents } from '@bumperline/db/queries/call-events';
+import { getCompanyLocale } from '@bumperline/db/queries/companies';
+import { findGameByTag, type TaggedGame } from '@bumperline/db/queries/game-tags';
+import { InvalidInput } from '../services/workflow-errors.ts';
 import { openCall } from '../services/service-calls.ts';
 import type { PhotoStore } from '../services/photo-store.ts';
 import { CounterStore, postgresCounter } from '../http/rate-limit-counter.ts';
@@ -46,25 +47,15 @@ const REPORTER = 'Reporter (game tag)';
 const TOKEN = /^[A-Za-z0-9_-]{16,64}$/;
 const SCRIPT = readFileSync(path.join(path.dirname(fileURLToPath(import.meta.url)), '../public-pages/report.js'));
 
-interface Tag {
-  tenant_id: string;
-  game_id: string;
-  title: string;
-  venue_name: string | null;
-  retired: boolean;
-}
-
-async function findActiveTag(db: Db, token: string): Promise<Tag | undefined> {
+async function findActiveTag(db: Db, token: string): Promise<TaggedGame | undefined> {
   if (!TOKEN.test(token)) return undefined;
-  const r = await withScope(db, {}, (tx) => tx.execute(sql`select * from game_by_tag(${token})`));
-  const tag = r.rows[0] as Tag | undefined;
+  const tag = await findGameByTag(db, token);
   return tag && !tag.retired ? tag : undefined;
 }
 
-async function findCallByStatus(db: Db, token: string): Promise<{ tenant_id: string; call_id: string } | undefined> {
+async function findCallByStatus(db: Db, token: string): Promise<{ tenantId: string; callId: string } | undefined> {
   if (!TOKEN.test(token)) return undefined;
-  const r = await withScope(db, {}, (tx) => tx.execute(sql`select * from call_by_status_token(${token})`));
-  return r.rows[0] as { tenant_id: string; call_id: string } | undefined;
+  return findCallByStatusToken(db, token);
 }
 
 /**
@@ -157,9 +148,9 @@ export function publicTagsRouter(deps: { db: Db; photos: PhotoStore; appOrigin: 
     fieldLabels: { note: 'Your note', phone: 'The mobile number' },
   });
 
-  const formPage = (tag: Tag, token: string, extra: { values?: ReportValues; errors?: ReportErrors; photoNotKept?: boolean } = {}) =>
+  const formPage = (tag: TaggedGame, token: string, extra: { values?: ReportValues; errors?: ReportErrors; photoNotKept?: boolean } = {}) =>
     reportPage({
-      game: { title: tag.title, venueName: tag.venue_name },
+      game: { title: tag.title, venueName: tag.venueName },
       action: `/t/${encodeURIComponent(token)}`,
       maxPhotoMb: PHOTO_MAX_BYTES / (1024 * 1024),
       noteMax: NOTE_MAX,
@@ -226,9 +217,9 @@ export function publicTagsRouter(deps: { db: Db; photos: PhotoStore; appOrigin: 
       let opened;
       const written: string[] = [];
       try {
-        opened = await withScope(db, { tenantId: tag.tenant_id }, async (tx) => {
+        opened = await withScope(db, { tenantId: tag.tenantId }, async (tx) => {
           const call = await openCall(tx, {
-            gameId: tag.game_id,
+            gameId: tag.gameId,
             problem: input.problem,
             note: input.note,
             source: 'game_tag',
@@ -245,7 +236,7 @@ export function publicTagsRouter(deps: { db: Db; photos: PhotoStore; appOrigin: 
         // Nothing of a report that was not saved may stay on disk.
         await Promise.all(written.map((key) => photos.remove(key).catch(() => {})));
         // The game was retired between the lookup and the report.
-        if (err instanceof ValidationError) return send(res, 404, inactiveTag());
+        if (err instanceof InvalidInput) return send(res, 404, inactiveTag());
         throw err;
       }
 
@@ -260,9 +251,9 @@ export function publicTagsRouter(deps: { db: Db; photos: PhotoStore; appOrigin: 
     htmlPage(async (req, res) => {
       const tag = await findActiveTag(db, tokenOf(req));
       const found = await findCallByStatus(db, asToken(req.query.call));
-      if (!tag || !found || found.tenant_id !== tag.tenant_id) return send(res, 404, unknownStatus());
-      const call = await withScope(db, { tenantId: found.tenant_id }, (tx) => getCall(tx, found.call_id));
-      if (!call || call.gameId !== tag.game_id) return send(res, 404, unknownStatus());
+      if (!tag || !found || found.tenantId !== tag.tenantId) return send(res, 404, unknownStatus());
+      const call = await withScope(db, { tenantId: found.tenantId }, (tx) => getCall(tx, found.callId));
+      if (!call || call.gameId !== tag.gameId) return send(res, 404, unknownStatus());
       const statusPath = `/status/${encodeURIComponent(str(req.query.call)!)}`;
       const sms = str(req.query.sms);
       send(
@@ -285,13 +276,10 @@ export function publicTagsRouter(deps: { db: Db; photos: PhotoStore; appOrigin: 
     htmlPage(async (req, res) => {
       const found = await findCallByStatus(db, tokenOf(req));
       if (!found) return send(res, 404, unknownStatus());
-      const view = await withScope(db, { tenantId: found.tenant_id }, async (tx) => {
-        const call = await getCall(tx, found.call_id);
+      const view = await withScope(db, { tenantId: found.tenantId }, async (tx) => {
+        const call = await getCall(tx, found.callId);
         if (!call) return undefined;
-        const [company] = await tx
-          .select({ timeZone: tenants.timeZone, locale: tenants.locale })
-          .from(tenants)
-          .where(eq(tenants.id, found.tenant_id));
+        const company = await getCompanyLocale(tx, found.tenantId);
         return { call, events: await listEvents(tx, call.id), timeZone: company?.timeZone ?? 'UTC', locale: company?.locale ?? 'en-US' };
       });
       if (!view) return send(res, 404, unknownStatus());

@@ -2,14 +2,15 @@
 // changes of what we sent (/status). Both are form-encoded and signed with X-Twilio-Signature over our
 // public URL; anything unsigned or mis-signed is refused before it can change anything.
 import express, { Router, type RequestHandler } from 'express';
-import { and, desc, eq, inArray, isNull, or, sql } from 'drizzle-orm';
 import twilio from 'twilio';
 import type { Logger } from 'pino';
 import { callRef } from '@bumperline/contracts/calls';
 import { withScope, type Db, type Tx } from '@bumperline/db/client';
-import { insertEvent } from '@bumperline/db/queries/calls';
-import { outbox, serviceCalls, smsOptOuts } from '@bumperline/db/schema/index';
-import { tenantMatches } from '@bumperline/db/schema/rls';
+import { findNewestPendingAssignment, lockAssignment } from '@bumperline/db/queries/calls';
+import { insertEvent } from '@bumperline/db/queries/call-events';
+import { findMessagesByProviderId, recordProviderStatus } from '@bumperline/db/queries/outbox';
+import { optIn, optOut } from '@bumperline/db/queries/sms-opt-outs';
+import { findTechniciansByPhone } from '@bumperline/db/queries/technicians';
 import { HttpError, ValidationError } from '../http/errors.ts';
 import { refuseNulBytes } from '../http/nul-bytes.ts';
 import { answerAssignment } from '../services/service-calls.ts';
@@ -99,13 +100,10 @@ export function smsWebhookRouter(deps: SmsWebhookDeps): Router {
 async function handleInbound(deps: SmsWebhookDeps, from: string, body: string): Promise<string | undefined> {
   const word = keywordOf(body);
   if (OPT_OUT.has(word)) {
-    await deps.db
-      .insert(smsOptOuts)
-      .values({ phone: from })
-      .onConflictDoUpdate({ target: smsOptOuts.phone, set: { optedOutAt: new Date() } });
+    await optOut(deps.db, from);
     return undefined; // the provider confirms; nothing more may be sent
   }
-  if (OPT_IN.has(word)) await deps.db.delete(smsOptOuts).where(eq(smsOptOuts.phone, from));
+  if (OPT_IN.has(word)) await optIn(deps.db, from);
   if (HELP.has(word)) return HELP_TEXT;
 
   const pending = await newestPendingAssignment(deps.db, from);
@@ -127,27 +125,10 @@ interface PendingAssignment {
  * technician works for: the phone number is all we know, so the lookup starts from it.
  */
 async function newestPendingAssignment(db: Db, phone: string): Promise<PendingAssignment | undefined> {
-  const techs = await db.execute<{ tenant_id: string; user_id: string }>(
-    sql`select tenant_id, user_id from technicians_by_phone(${phone})`,
-  );
   let newest: (PendingAssignment & { at: Date }) | undefined;
-  for (const t of techs.rows) {
-    const [call] = await withScope(db, { tenantId: t.tenant_id, userId: t.user_id }, (tx) =>
-      tx
-        .select({ id: serviceCalls.id, at: serviceCalls.updatedAt })
-        .from(serviceCalls)
-        .where(
-          and(
-            tenantMatches(serviceCalls.tenantId),
-            eq(serviceCalls.technicianId, t.user_id),
-            eq(serviceCalls.state, 'assigned'),
-            isNull(serviceCalls.acceptedAt),
-          ),
-        )
-        .orderBy(desc(serviceCalls.updatedAt))
-        .limit(1),
-    );
-    if (call && (!newest || call.at > newest.at)) newest = { tenantId: t.tenant_id, technicianId: t.user_id, callId: call.id, at: call.at };
+  for (const t of await findTechniciansByPhone(db, phone)) {
+    const call = await withScope(db, { tenantId: t.tenantId, userId: t.userId }, (tx) => findNewestPendingAssignment(tx, t.userId));
+    if (call && (!newest || call.at > newest.at)) newest = { tenantId: t.tenantId, technicianId: t.userId, callId: call.id, at: call.at };
   }
   return newest && { tenantId: newest.tenantId, technicianId: newest.technicianId, callId: newest.callId };
 }
@@ -155,11 +136,7 @@ async function newestPendingAssignment(db: Db, phone: string): Promise<PendingAs
 async function applyAnswer(tx: Tx, p: PendingAssignment & { from: string; body: string; answer: boolean | undefined }): Promise<string> {
   const label = `SMS from ${p.from}`;
   // Lock the call and look again: a second reply, or a dispatcher reassigning, may have come first.
-  const [call] = await tx
-    .select({ state: serviceCalls.state, technicianId: serviceCalls.technicianId, acceptedAt: serviceCalls.acceptedAt })
-    .from(serviceCalls)
-    .where(and(tenantMatches(serviceCalls.tenantId), eq(serviceCalls.id, p.callId)))
-    .for('update');
+  const call = await lockAssignment(tx, p.callId);
   await insertEvent(tx, { callId: p.callId, kind: 'sms_in', actorUserId: p.technicianId, actorLabel: label, detail: { body: p.body } });
   const ref = callRef(p.callId);
   const stillPending = call && call.state === 'assigned' && call.technicianId === p.technicianId && !call.acceptedAt;
@@ -191,30 +168,13 @@ const STAGE: Record<string, number> = {
 
 async function recordStatus(deps: SmsWebhookDeps, providerId: string, status: string, errorCode: string | undefined): Promise<void> {
   if (!Object.hasOwn(STAGE, status)) throw new ValidationError([{ field: 'MessageStatus', message: 'is not a known message status' }]);
-  const owners = await deps.db.execute<{ tenant_id: string; id: string }>(
-    sql`select tenant_id, id from outbox_by_provider_id(${providerId})`,
-  );
-  if (owners.rows.length === 0) deps.logger?.debug({ providerId, status }, 'status for a message we do not know (yet)');
+  const owners = await findMessagesByProviderId(deps.db, providerId);
+  if (owners.length === 0) deps.logger?.debug({ providerId, status }, 'status for a message we do not know (yet)');
   // Only over an earlier stage (or none yet): a late "sent" must not overwrite "delivered".
   const notLater = Object.keys(STAGE).filter((s) => STAGE[s]! <= STAGE[status]!);
   const undelivered = status === 'failed' || status === 'undelivered';
-  for (const row of owners.rows) {
-    await withScope(deps.db, { tenantId: row.tenant_id }, (tx) =>
-      tx
-        .update(outbox)
-        .set({
-          providerStatus: status,
-          ...(undelivered
-            ? { status: 'failed' as const, lastError: `the provider reports ${status}${errorCode ? ` (error ${errorCode})` : ''}` }
-            : {}),
-        })
-        .where(
-          and(
-            tenantMatches(outbox.tenantId),
-            eq(outbox.id, row.id),
-            or(isNull(outbox.providerStatus), inArray(outbox.providerStatus, notLater)),
-          ),
-        ),
-    );
+  const failure = undelivered ? `the provider reports ${status}${errorCode ? ` (error ${errorCode})` : ''}` : undefined;
+  for (const row of owners) {
+    await withScope(deps.db, { tenantId: row.tenantId }, (tx) => recordProviderStatus(tx, row.id, status, { over: notLater, failure }));
   }
 }

@@ -1,8 +1,7 @@
 // The company's people: members and their roles, invitations by e-mail, and accepting one.
 import { Router } from 'express';
-import { acceptInvitationInput, invitationInput, memberRoleUpdate } from '@bumperline/contracts/auth';
+import { acceptInvitationInput, invitationInput, memberRoleUpdate } from '@bumperline/contracts/team';
 import { roleLabels } from '@bumperline/contracts/roles';
-import { eq } from 'drizzle-orm';
 import { withScope, type Db } from '@bumperline/db/client';
 import {
   addMember,
@@ -17,10 +16,9 @@ import {
   revokeInvitation,
   setMemberRole,
 } from '@bumperline/db/queries/team';
-import { findUserByEmail, setActiveCompany } from '@bumperline/db/queries/identity';
+import { findUserByEmail, insertUser, setActiveCompany, updateUser } from '@bumperline/db/queries/identity';
 import { recordEmailProof } from '@bumperline/db/queries/email-proof';
 import { recordAudit } from '@bumperline/db/queries/audit';
-import { users } from '@bumperline/db/schema/index';
 import { hashPassword } from '@bumperline/db/passwords';
 import { ConflictError, HttpError, NotFoundError, ValidationError } from '../http/errors.ts';
 import type { makeScoped } from '../http/guards.ts';
@@ -136,14 +134,32 @@ export function invitationsRouter(db: Db): Router {
   const r = Router();
 
   async function lookup(token: string) {
-    const inv = await withScope(db, {}, (tx) => findInvitationByTokenHash(tx, hashToken(token)));
+    const inv = await findInvitationByTokenHash(db, hashToken(token));
     if (!inv) throw new NotFoundError('invitation');
-    if (inv.revoked_at)
-      throw new HttpError(410, 'Invitation withdrawn', 'This invitation was withdrawn. Ask for a new one.', undefined, 'gone');
-    if (inv.accepted_at)
-      throw new HttpError(410, 'Invitation used', 'This invitation was already accepted. Sign in instead.', undefined, 'gone');
-    if (new Date(inv.expires_at) < new Date())
-      throw new HttpError(410, 'Invitation expired', 'This invitation has expired. Ask for a new one.', undefined, 'gone');
+    if (inv.revokedAt)
+      throw new HttpError(
+        410,
+        'Invitation withdrawn',
+        'This invitation was withdrawn. Ask for a new one.',
+        [{ field: 'token', message: 'was withdrawn' }],
+        'gone',
+      );
+    if (inv.acceptedAt)
+      throw new HttpError(
+        410,
+        'Invitation used',
+        'This invitation was already accepted. Sign in instead.',
+        [{ field: 'token', message: 'was already used' }],
+        'gone',
+      );
+    if (inv.expiresAt < new Date())
+      throw new HttpError(
+        410,
+        'Invitation expired',
+        'This invitation has expired. Ask for a new one.',
+        [{ field: 'token', message: 'has expired' }],
+        'gone',
+      );
     return inv;
   }
 
@@ -157,7 +173,7 @@ export function invitationsRouter(db: Db): Router {
   r.get('/:token', async (req, res) => {
     const inv = await lookup(req.params.token);
     const { proven } = await provenAccount(inv.email);
-    res.json({ companyName: inv.tenant_name, email: inv.email, role: inv.role, hasAccount: !!proven });
+    res.json({ companyName: inv.tenantName, email: inv.email, role: inv.role, hasAccount: !!proven });
   });
 
   r.post('/:token/accept', async (req, res) => {
@@ -176,7 +192,7 @@ export function invitationsRouter(db: Db): Router {
       if (errors.length) throw new ValidationError(errors);
     }
     const passwordHash = proven ? null : await hashPassword(input.password!);
-    const userId = await withScope(db, { tenantId: inv.tenant_id }, async (tx) => {
+    const userId = await withScope(db, { tenantId: inv.tenantId }, async (tx) => {
       // First, so that of simultaneous accepts one goes on and the others stop here, having written nothing.
       if (!(await claimInvitation(tx, inv.id))) {
         throw new HttpError(
@@ -191,21 +207,17 @@ export function invitationsRouter(db: Db): Router {
       if (proven) id = proven.id;
       else if (user) {
         await recordEmailProof(tx, user.id, { keepPassword: false });
-        await tx.update(users).set({ name: input.name!, passwordHash }).where(eq(users.id, user.id));
+        await updateUser(tx, user.id, { name: input.name!, passwordHash });
         id = user.id;
       } else {
-        const [u] = await tx
-          .insert(users)
-          .values({ email: inv.email, name: input.name!, passwordHash, emailVerifiedAt: new Date() })
-          .returning({ id: users.id });
-        id = u!.id;
+        id = await insertUser(tx, { email: inv.email, name: input.name!, passwordHash, emailVerifiedAt: new Date() });
       }
       await addMember(tx, id, inv.role);
       await recordAudit(tx, { actorUserId: id, action: 'join', entity: 'member', entityId: id, after: { role: inv.role } });
       return id;
     });
-    if (req.actor?.userId === userId) await setActiveCompany(db, req.actor.sessionId, inv.tenant_id);
-    res.status(201).json({ companyId: inv.tenant_id, role: inv.role, email: inv.email });
+    if (req.actor?.userId === userId) await setActiveCompany(db, req.actor.sessionId, inv.tenantId);
+    res.status(201).json({ companyId: inv.tenantId, role: inv.role, email: inv.email });
   });
 
   return r;

@@ -1,10 +1,8 @@
 import { Router } from 'express';
-import { venueInput, venueListQuery, venueUpdate } from '@bumperline/contracts/venues';
+import { venueContactInput, venueInput, venueListQuery, venueUpdate } from '@bumperline/contracts/venues';
 import { getVenue, insertVenue, listVenues, updateVenue } from '@bumperline/db/queries/venues';
 import { recordAudit } from '@bumperline/db/queries/audit';
 import { linkVenueContact, listVenueContactMembers, listVenueContacts, unlinkVenueContact } from '@bumperline/db/queries/venue-contacts';
-import { z } from 'zod';
-import { uuid } from '@bumperline/contracts/common';
 import { ConflictError, NotFoundError, ValidationError } from '../http/errors.ts';
 import { parse } from '../http/validate.ts';
 import { idParam } from '../http/params.ts';
@@ -89,7 +87,7 @@ export function venuesRouter(scoped: ReturnType<typeof makeScoped>): Router {
       'venues:write',
       async ({ tx, req, actor }) => {
         const id = idParam(req);
-        const { userId } = parse(z.strictObject({ userId: uuid }), req.body);
+        const { userId } = parse(venueContactInput, req.body);
         if (!(await getVenue(tx, id))) throw new NotFoundError('venue');
         if (!(await listVenueContactMembers(tx)).some((m) => m.userId === userId)) {
           throw new ValidationError([{ field: 'userId', message: 'is not a venue contact of this company' }]);

@@ -6,7 +6,8 @@ import multer from 'multer';
 import sharp from 'sharp';
 import { fileTypeFromBuffer } from 'file-type';
 import type { Tx } from '@bumperline/db/client';
-import { insertEvent, insertPhoto } from '@bumperline/db/queries/calls';
+import { insertEvent } from '@bumperline/db/queries/call-events';
+import { insertPhoto } from '@bumperline/db/queries/call-photos';
 import type { PhotoStore } from './photo-store.ts';
 
 export const PHOTO_MAX_BYTES = 10 * 1024 * 1024;

@@ -5,6 +5,7 @@ import {
   canTransition,
   callStateLabels,
   defaultSeverity,
+  inStateGroup,
   type CallState,
   type ProblemKind,
   type Severity,
@@ -12,24 +13,22 @@ import {
 import type { Role } from '@bumperline/contracts/roles';
 import type { Tx } from '@bumperline/db/client';
 import {
-  closeDowntime,
   countUnfixedCallsForGame,
-  enqueueMessage,
   findUnfixedCallForGame,
   getCall,
   getCallRow,
-  getSettings,
   insertCall,
-  insertEvent,
-  isTechnician,
-  openDowntime,
   updateCall,
-  venueContactEmails,
 } from '@bumperline/db/queries/calls';
+import { insertEvent } from '@bumperline/db/queries/call-events';
+import { closeDowntime, openDowntime } from '@bumperline/db/queries/downtime';
 import { getGame, updateGame } from '@bumperline/db/queries/games';
-import { users } from '@bumperline/db/schema/index';
-import { eq } from 'drizzle-orm';
-import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from '../http/errors.ts';
+import { findUserById } from '@bumperline/db/queries/identity';
+import { enqueueMessage } from '@bumperline/db/queries/outbox';
+import { getSettings } from '@bumperline/db/queries/settings';
+import { isTechnician } from '@bumperline/db/queries/technicians';
+import { venueContactEmails } from '@bumperline/db/queries/venue-contacts';
+import { Conflict, InvalidInput, NotAllowed, NotFound } from './workflow-errors.ts';
 import { reporterUpdateSms, technicianAssignedSms, venueCallClosedEmail, venueCallOpenedEmail } from './call-messages.ts';
 import { appLink } from './links.ts';
 
@@ -53,11 +52,9 @@ export interface OpenCallParams {
   now?: Date;
 }
 
-const REPORTER_NOTIFY: CallState[] = ['on_the_way', 'on_site', 'at_shop', 'fixed', 'closed', 'cancelled'];
-
 export async function openCall(tx: Tx, p: OpenCallParams): Promise<{ callId: string; statusToken: string; joined: boolean }> {
   const game = await getGame(tx, p.gameId);
-  if (!game || game.retiredAt) throw new ValidationError([{ field: 'gameId', message: 'is not a game on location' }]);
+  if (!game || game.retiredAt) throw new InvalidInput([{ field: 'gameId', message: 'is not a game on location' }]);
   const now = p.now ?? new Date();
   const phone = p.smsConsent && p.reporterPhone ? p.reporterPhone : null;
 
@@ -140,7 +137,7 @@ async function gameBackInService(tx: Tx, gameId: string, at: Date) {
 
 function assertMayWork(actor: CallActor, call: { technicianId: string | null }) {
   if (actor.role === 'technician' && call.technicianId !== actor.userId) {
-    throw new ForbiddenError('Only the technician assigned to this call, or a dispatcher, can change it.');
+    throw new NotAllowed('Only the technician assigned to this call, or a dispatcher, can change it.');
   }
 }
 
@@ -149,16 +146,16 @@ export async function transitionCall(
   p: { callId: string; to: CallState; version: number; note?: string; actor: CallActor; appOrigin: string; now?: Date },
 ) {
   const call = await getCallRow(tx, p.callId);
-  if (!call) throw new NotFoundError('service call');
+  if (!call) throw new NotFound('service call');
   assertMayWork(p.actor, call);
   if (p.to === 'cancelled' && p.actor.role === 'technician') {
-    throw new ForbiddenError('Only a dispatcher or an owner can cancel a call.');
+    throw new NotAllowed('Only a dispatcher or an owner can cancel a call.');
   }
   if (call.version !== p.version) {
-    throw new ConflictError('This call changed since you opened it. Here is where it stands now.', await getCall(tx, p.callId));
+    throw new Conflict('This call changed since you opened it. Here is where it stands now.', await getCall(tx, p.callId));
   }
   if (!canTransition(call.state, p.to)) {
-    throw new ConflictError(
+    throw new Conflict(
       `A call that is "${callStateLabels[call.state]}" cannot become "${callStateLabels[p.to]}".`,
       await getCall(tx, p.callId),
     );
@@ -169,7 +166,7 @@ export async function transitionCall(
   if (p.to === 'on_site' && call.state === 'fixed') patch.fixedAt = null;
   if (p.to === 'closed' || p.to === 'cancelled') patch.closedAt = now;
   if (!(await updateCall(tx, p.callId, p.version, patch))) {
-    throw new ConflictError('This call changed since you opened it. Here is where it stands now.', await getCall(tx, p.callId));
+    throw new Conflict('This call changed since you opened it. Here is where it stands now.', await getCall(tx, p.callId));
   }
   await insertEvent(tx, {
     callId: p.callId,
@@ -194,7 +191,7 @@ export async function transitionCall(
   const view = (await getCall(tx, p.callId))!;
   const facts = { id: view.id, gameTitle: view.gameTitle, venueName: view.venueName, problem: view.problem };
   const statusLink = appLink(p.appOrigin, `/status/${call.statusToken}`);
-  if (call.reporterSmsConsent && call.reporterPhone && REPORTER_NOTIFY.includes(p.to)) {
+  if (call.reporterSmsConsent && call.reporterPhone && inStateGroup('reporterNotified', p.to)) {
     await enqueueMessage(tx, { channel: 'sms', to: call.reporterPhone, body: reporterUpdateSms(facts, p.to, statusLink), callId: call.id });
   }
   if (p.to === 'closed' && call.venueId) {
@@ -211,20 +208,20 @@ export async function assignCall(
   p: { callId: string; technicianId: string | null; version: number; actor: CallActor; appOrigin: string; now?: Date },
 ) {
   const call = await getCallRow(tx, p.callId);
-  if (!call) throw new NotFoundError('service call');
+  if (!call) throw new NotFound('service call');
   if (call.version !== p.version) {
-    throw new ConflictError('Someone else changed this call first. Here is where it stands now.', await getCall(tx, p.callId));
+    throw new Conflict('Someone else changed this call first. Here is where it stands now.', await getCall(tx, p.callId));
   }
-  if (!['reported', 'assigned', 'on_the_way'].includes(call.state)) {
-    throw new ConflictError(`A call that is "${callStateLabels[call.state]}" cannot be (re)assigned.`, await getCall(tx, p.callId));
+  if (!inStateGroup('awaitingArrival', call.state)) {
+    throw new Conflict(`A call that is "${callStateLabels[call.state]}" cannot be (re)assigned.`, await getCall(tx, p.callId));
   }
   if (p.technicianId && !(await isTechnician(tx, p.technicianId))) {
-    throw new ValidationError([{ field: 'technicianId', message: 'is not a technician of this company' }]);
+    throw new InvalidInput([{ field: 'technicianId', message: 'is not a technician of this company' }]);
   }
   const now = p.now ?? new Date();
   const toState: CallState = p.technicianId ? 'assigned' : 'reported';
   const updated = await updateCall(tx, p.callId, p.version, { technicianId: p.technicianId, state: toState, acceptedAt: null });
-  if (!updated) throw new ConflictError('Someone else changed this call first. Here is where it stands now.', await getCall(tx, p.callId));
+  if (!updated) throw new Conflict('Someone else changed this call first. Here is where it stands now.', await getCall(tx, p.callId));
   await insertEvent(tx, {
     callId: p.callId,
     kind: p.technicianId ? 'assigned' : 'unassigned',
@@ -237,7 +234,7 @@ export async function assignCall(
   });
   const view = (await getCall(tx, p.callId))!;
   if (p.technicianId) {
-    const [tech] = await tx.select({ phone: users.phone }).from(users).where(eq(users.id, p.technicianId));
+    const tech = await findUserById(tx, p.technicianId);
     if (tech?.phone) {
       const facts = { id: view.id, gameTitle: view.gameTitle, venueName: view.venueName, problem: view.problem };
       await enqueueMessage(tx, {
@@ -254,10 +251,10 @@ export async function assignCall(
 /** The technician's answer to an assignment (an SMS reply or a button): accept, or decline back to dispatch. */
 export async function answerAssignment(tx: Tx, p: { callId: string; technicianId: string; accept: boolean; actor: CallActor; now?: Date }) {
   const call = await getCallRow(tx, p.callId);
-  if (!call || call.technicianId !== p.technicianId) throw new NotFoundError('assignment');
+  if (!call || call.technicianId !== p.technicianId) throw new NotFound('assignment');
   const now = p.now ?? new Date();
   if (call.state !== 'assigned' || call.acceptedAt) {
-    throw new ConflictError(
+    throw new Conflict(
       call.acceptedAt ? 'You already accepted this call.' : 'This call is no longer waiting for your answer.',
       await getCall(tx, call.id),
     );
@@ -268,7 +265,7 @@ export async function answerAssignment(tx: Tx, p: { callId: string; technicianId
     call.version,
     p.accept ? { acceptedAt: now } : { technicianId: null, state: 'reported', acceptedAt: null },
   );
-  if (!changed) throw new ConflictError('This call changed at the same moment. Here is where it stands now.', await getCall(tx, call.id));
+  if (!changed) throw new Conflict('This call changed at the same moment. Here is where it stands now.', await getCall(tx, call.id));
   if (p.accept) {
     await insertEvent(tx, { callId: call.id, kind: 'accepted', at: now, actorUserId: p.technicianId, actorLabel: p.actor.label });
   } else {

@@ -1,60 +1,43 @@
 // Service-call endpoints: fetchers, query-option factories (the only place their keys live) and hooks.
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Page } from '@bumperline/contracts/common';
-import type { CallEvent, CallListQuery, CallState, OpenCallInput, ServiceCall, Severity } from '@bumperline/contracts/calls';
+import type {
+  CallDetail,
+  CallListQuery,
+  CallPage,
+  CallState,
+  NoteAdded,
+  OpenCallInput,
+  OpenedCall,
+  RankedTechnicianList,
+  ServiceCall,
+  Severity,
+  TechnicianList,
+} from '@bumperline/contracts/calls';
 import { get, post } from '../lib/api-client.ts';
-
-export interface CallMessage {
-  id: string;
-  channel: 'sms' | 'email';
-  toAddress: string;
-  subject: string;
-  body: string;
-  status: string;
-  providerStatus: string | null;
-  createdAt: string;
-  sentAt: string | null;
-}
-export interface CallPhoto {
-  id: string;
-  width: number;
-  height: number;
-  createdAt: string;
-  uploadedBy: string;
-}
-export interface CallDetail {
-  call: ServiceCall;
-  events: CallEvent[];
-  messages: CallMessage[];
-  photos: CallPhoto[];
-}
-export interface RankedTechnician {
-  userId: string;
-  name: string;
-  skills: string[];
-  openCalls: number;
-  hasPhone: boolean;
-  rank: { score: number; distanceKm: number; excluded: boolean; missingSkills: string[]; reasons: string[] } | null;
-}
 
 export const callKeys = {
   all: ['calls'] as const,
   list: (q: CallListQuery) => ['calls', 'list', q] as const,
   detail: (id: string) => ['calls', 'detail', id] as const,
   technicians: (id: string) => ['calls', 'technicians', id] as const,
+  allTechnicians: ['technicians'] as const,
 };
 
-export const listCalls = (q: CallListQuery) => get<Page<ServiceCall>>('/api/calls', q as Record<string, string>);
+export const listCalls = (q: CallListQuery) => get<CallPage>('/api/calls', q as Record<string, string>);
 export const callListQuery = (q: CallListQuery) =>
   queryOptions({ queryKey: callKeys.list(q), queryFn: () => listCalls(q), placeholderData: keepPreviousData, refetchInterval: 30_000 });
 export const callQuery = (id: string) =>
   queryOptions({ queryKey: callKeys.detail(id), queryFn: () => get<CallDetail>(`/api/calls/${id}`) });
 export const rankedTechniciansQuery = (id: string) =>
-  queryOptions({ queryKey: callKeys.technicians(id), queryFn: () => get<{ items: RankedTechnician[] }>(`/api/calls/${id}/technicians`) });
+  queryOptions({ queryKey: callKeys.technicians(id), queryFn: () => get<RankedTechnicianList>(`/api/calls/${id}/technicians`) });
 
 export const useCalls = (q: CallListQuery) => useQuery(callListQuery(q));
 export const useCall = (id: string) => useQuery(callQuery(id));
 export const useRankedTechnicians = (id: string, enabled: boolean) => useQuery({ ...rankedTechniciansQuery(id), enabled });
+/** The company's technicians (for dispatchers: the technician filter). */
+export const techniciansQuery = () =>
+  queryOptions({ queryKey: callKeys.allTechnicians, queryFn: () => get<TechnicianList>('/api/technicians') });
+export const useTechnicians = (enabled: boolean) => useQuery({ ...techniciansQuery(), enabled });
 
 export async function allCalls(q: Omit<CallListQuery, 'cursor' | 'limit'>): Promise<ServiceCall[]> {
   const out: ServiceCall[] = [];
@@ -81,13 +64,13 @@ function useCallMutation<V, R>(fn: (v: V) => Promise<R>) {
   });
 }
 
-export const useOpenCall = () => useCallMutation((v: OpenCallInput) => post<ServiceCall & { joined: boolean }>('/api/calls', v));
+export const useOpenCall = () => useCallMutation((v: OpenCallInput) => post<OpenedCall>('/api/calls', v));
 export const useAssignCall = (id: string) =>
   useCallMutation((v: { technicianId: string | null; version: number }) => post<ServiceCall>(`/api/calls/${id}/assign`, v));
 export const useTransitionCall = (id: string) =>
   useCallMutation((v: { to: CallState; version: number; note?: string }) => post<ServiceCall>(`/api/calls/${id}/transition`, v));
 export const useAnswerAssignment = (id: string) =>
   useCallMutation((accept: boolean) => post<ServiceCall>(`/api/calls/${id}/answer`, { accept }));
-export const useAddNote = (id: string) => useCallMutation((note: string) => post(`/api/calls/${id}/notes`, { note }));
+export const useAddNote = (id: string) => useCallMutation((note: string) => post<NoteAdded>(`/api/calls/${id}/notes`, { note }));
 export const useSetSeverity = (id: string) =>
   useCallMutation((v: { severity: Severity; version: number }) => post<ServiceCall>(`/api/calls/${id}/severity`, v));

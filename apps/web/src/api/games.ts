@@ -1,7 +1,19 @@
 // Game and game-model endpoints: fetchers, query-option factories (the only place their keys live) and hooks.
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Page } from '@bumperline/contracts/common';
-import type { Game, GameInput, GameListQuery, GameModel, GameModelInput, GameUpdate } from '@bumperline/contracts/games';
+import type {
+  DowntimeList,
+  Game,
+  GameDetail,
+  GameInput,
+  GameListQuery,
+  GameModel,
+  GameModelInput,
+  GameModelList,
+  GamePage,
+  GameSummary,
+  GameUpdate,
+  TagRegenerated,
+} from '@bumperline/contracts/games';
 import { get, patch, post } from '../lib/api-client.ts';
 
 export const gameKeys = {
@@ -11,13 +23,14 @@ export const gameKeys = {
   models: ['models'] as const,
 };
 
-export const listGames = (q: GameListQuery) => get<Page<Game>>('/api/games', q as Record<string, string>);
+export const listGames = (q: GameListQuery) => get<GamePage>('/api/games', q as Record<string, string>);
 
 export const gameListQuery = (q: GameListQuery) =>
   queryOptions({ queryKey: gameKeys.list(q), queryFn: () => listGames(q), placeholderData: keepPreviousData });
-export const gameQuery = (id: string) => queryOptions({ queryKey: gameKeys.detail(id), queryFn: () => get<Game>(`/api/games/${id}`) });
+export const gameQuery = (id: string) =>
+  queryOptions({ queryKey: gameKeys.detail(id), queryFn: () => get<GameDetail>(`/api/games/${id}`) });
 export const modelsQuery = () =>
-  queryOptions({ queryKey: gameKeys.models, queryFn: () => get<{ items: GameModel[] }>('/api/models'), staleTime: 5 * 60_000 });
+  queryOptions({ queryKey: gameKeys.models, queryFn: () => get<GameModelList>('/api/models'), staleTime: 5 * 60_000 });
 
 export const useGames = (q: GameListQuery) => useQuery(gameListQuery(q));
 export const useGame = (id: string) => useQuery(gameQuery(id));
@@ -65,20 +78,14 @@ export function useCreateModel() {
 export const gameSummaryQuery = () =>
   queryOptions({
     queryKey: ['games', 'summary'] as const,
-    queryFn: () => get<{ byStatus: Partial<Record<Game['status'], number>>; total: number }>('/api/games/summary'),
+    queryFn: () => get<GameSummary>('/api/games/summary'),
   });
 export const useGameSummary = () => useQuery(gameSummaryQuery());
 
-export interface DowntimeInterval {
-  id: string;
-  callId: string | null;
-  startedAt: string;
-  endedAt: string | null;
-}
 export const gameDowntimeQuery = (id: string) =>
   queryOptions({
     queryKey: ['games', 'downtime', id] as const,
-    queryFn: () => get<{ items: DowntimeInterval[] }>(`/api/games/${id}/downtime`),
+    queryFn: () => get<DowntimeList>(`/api/games/${id}/downtime`),
   });
 export const useGameDowntime = (id: string) => useQuery(gameDowntimeQuery(id));
 
@@ -86,7 +93,7 @@ export const useGameDowntime = (id: string) => useQuery(gameDowntimeQuery(id));
 export function useRegenerateTag(id: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: () => post<{ tagToken: string }>(`/api/games/${id}/regenerate-tag`),
+    mutationFn: () => post<TagRegenerated>(`/api/games/${id}/regenerate-tag`),
     onSuccess: () => qc.invalidateQueries({ queryKey: gameKeys.detail(id) }),
   });
 }

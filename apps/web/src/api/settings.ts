@@ -1,12 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { CompanySettings, SettingsUpdate } from '@bumperline/contracts/settings';
 import { get, patch } from '../lib/api-client.ts';
-
-export interface CompanySettings {
-  responseTargets: { down: number; fault: number; cosmetic: number };
-  warnBeforeMinutes: number;
-  mapTileUrl: string;
-  dispatchPhone: string;
-}
 
 export const settingsKeys = { all: ['settings'] as const };
 export const settingsQuery = () =>
@@ -16,7 +10,7 @@ export const useSettings = () => useQuery(settingsQuery());
 export function useSaveSettings() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (body: Partial<CompanySettings>) => patch<CompanySettings>('/api/settings', body),
+    mutationFn: (body: SettingsUpdate) => patch<CompanySettings>('/api/settings', body),
     onSuccess: (s) => qc.setQueryData(settingsKeys.all, s),
   });
 }

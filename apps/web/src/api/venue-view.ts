@@ -1,14 +1,6 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ProblemKind, ServiceCall } from '@bumperline/contracts/calls';
-import type { GameStatus } from '@bumperline/contracts/games';
+import type { VenueReportInput, VenueReportOpened, VenueView } from '@bumperline/contracts/venue-view';
 import { get, post } from '../lib/api-client.ts';
-
-export interface VenueView {
-  venues: { id: string; name: string; addressLine: string; city: string }[];
-  games: { id: string; venueId: string; serial: string; status: GameStatus; title: string; kind: string }[];
-  openCalls: ServiceCall[];
-  pastCalls: ServiceCall[];
-}
 
 export const venueViewKeys = { all: ['venue-view'] as const };
 export const venueViewQuery = () =>
@@ -18,8 +10,7 @@ export const useVenueView = () => useQuery(venueViewQuery());
 export function useVenueReport() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (v: { gameId: string; problem: ProblemKind; note: string }) =>
-      post<{ id: string; joined: boolean }>('/api/venue-view/calls', v),
+    mutationFn: (v: VenueReportInput) => post<VenueReportOpened>('/api/venue-view/calls', v),
     onSuccess: () => qc.invalidateQueries({ queryKey: venueViewKeys.all }),
   });
 }

@@ -1,7 +1,14 @@
 // Venue endpoints: fetchers, query-option factories (the only place venue query keys live) and hooks.
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Page } from '@bumperline/contracts/common';
-import type { Venue, VenueInput, VenueListQuery, VenueUpdate } from '@bumperline/contracts/venues';
+import type {
+  Venue,
+  VenueContactList,
+  VenueContactsLinked,
+  VenueInput,
+  VenueListQuery,
+  VenuePage,
+  VenueUpdate,
+} from '@bumperline/contracts/venues';
 import { del, get, patch, post } from '../lib/api-client.ts';
 
 export const venueKeys = {
@@ -10,7 +17,7 @@ export const venueKeys = {
   detail: (id: string) => ['venues', 'detail', id] as const,
 };
 
-export const listVenues = (q: VenueListQuery) => get<Page<Venue>>('/api/venues', q as Record<string, string>);
+export const listVenues = (q: VenueListQuery) => get<VenuePage>('/api/venues', q as Record<string, string>);
 
 export const venueListQuery = (q: VenueListQuery) =>
   queryOptions({ queryKey: venueKeys.list(q), queryFn: () => listVenues(q), placeholderData: keepPreviousData });
@@ -51,16 +58,10 @@ export function useRetireVenue(id: string) {
   });
 }
 
-export interface VenueContactPerson {
-  userId: string;
-  name: string;
-  email: string;
-}
-
 export const venueContactsQuery = (venueId: string) =>
   queryOptions({
     queryKey: [...venueKeys.detail(venueId), 'contacts'] as const,
-    queryFn: () => get<{ items: VenueContactPerson[]; candidates: VenueContactPerson[] }>(`/api/venues/${venueId}/contacts`),
+    queryFn: () => get<VenueContactList>(`/api/venues/${venueId}/contacts`),
   });
 export const useVenueContacts = (venueId: string) => useQuery(venueContactsQuery(venueId));
 
@@ -68,7 +69,9 @@ export function useLinkVenueContact(venueId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (v: { userId: string; link: boolean }) =>
-      v.link ? post(`/api/venues/${venueId}/contacts`, { userId: v.userId }) : del(`/api/venues/${venueId}/contacts/${v.userId}`),
+      v.link
+        ? post<VenueContactsLinked>(`/api/venues/${venueId}/contacts`, { userId: v.userId })
+        : del(`/api/venues/${venueId}/contacts/${v.userId}`),
     onSuccess: () => qc.invalidateQueries({ queryKey: venueContactsQuery(venueId).queryKey }),
   });
 }

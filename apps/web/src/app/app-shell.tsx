@@ -6,7 +6,7 @@ import { can, roleLabels, type Permission } from '@bumperline/contracts/roles';
 import { useMe } from '../api/me.ts';
 import { useSwitchCompany } from '../api/switch-company.ts';
 import { signOut } from '../lib/auth-client.ts';
-import { paths } from './paths.ts';
+import { paths } from '../lib/paths.ts';
 
 const sections: { to: string; label: string; icon: typeof Gauge; needs?: Permission }[] = [
   { to: paths.home, label: 'Today', icon: Gauge },

@@ -4,7 +4,7 @@ import { Navigate, useLocation } from 'react-router-dom';
 import { can, type Permission } from '@bumperline/contracts/roles';
 import { useMe } from '../api/me.ts';
 import { ErrorState, Loading } from '../components/states.tsx';
-import { paths } from './paths.ts';
+import { paths } from '../lib/paths.ts';
 
 export function RequireSignedIn({ children }: { children: ReactNode }) {
   const me = useMe();

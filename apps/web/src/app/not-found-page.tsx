@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import { paths } from './paths.ts';
+import { paths } from '../lib/paths.ts';
 
 export function NotFoundPage() {
   return (

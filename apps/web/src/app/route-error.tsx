@@ -1,6 +1,6 @@
 // When a screen crashes: say so plainly, offer a way back, never a stack trace.
 import { Link, useRouteError } from 'react-router-dom';
-import { paths } from './paths.ts';
+import { paths } from '../lib/paths.ts';
 
 export function RouteError() {
   const error = useRouteError();

@@ -1,7 +1,7 @@
 import type { ReactNode } from 'react';
 import { createBrowserRouter, Navigate } from 'react-router-dom';
 import type { Permission } from '@bumperline/contracts/roles';
-import { paths } from './paths.ts';
+import { paths } from '../lib/paths.ts';
 import { AppShell } from './app-shell.tsx';
 import { RequirePermission, RequireSignedIn } from './guards.tsx';
 import { useMe } from '../api/me.ts';

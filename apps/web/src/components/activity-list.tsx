@@ -1,5 +1,5 @@
 // A readable audit trail: who did what, when, and which fields changed.
-import type { ActivityEntry } from '../api/activity.ts';
+import type { ActivityEntry } from '@bumperline/contracts/activity';
 import { formatDateTime } from '../lib/format.ts';
 
 const actionWords: Record<string, string> = {

@@ -1,32 +1,18 @@
-// Service-call queries, scoped by the caller's tenant transaction.
+// Service-call queries, scoped by the caller's tenant transaction; and the status-link lookup, which finds a
+// call's company from its token before any scope is known.
 import { randomBytes } from 'node:crypto';
-import { and, asc, desc, eq, inArray, isNull, sql, type SQL } from 'drizzle-orm';
+import { and, asc, desc, eq, inArray, isNull, lte, sql, type SQL } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/pg-core';
-import type { Tx } from '../client.ts';
-import {
-  callEvents,
-  callPhotos,
-  downtimeIntervals,
-  gameModels,
-  games,
-  memberships,
-  outbox,
-  serviceCalls,
-  technicianProfiles,
-  tenantSettings,
-  users,
-  venueContacts,
-  venues,
-} from '../schema/index.ts';
+import { withScope, type Db, type Tx } from '../client.ts';
+import { gameModels, games, serviceCalls, users, venues } from '../schema/index.ts';
 import { currentTenant } from '../schema/rls.ts';
+import { callStateGroups } from '@bumperline/contracts/calls';
 import { decodeCursor, keysetOrder, keysetWhere, toPage, type SortKey } from './keyset.ts';
 import { escapeLike } from './venues.ts';
+import { updateAtVersion } from './versioned-update.ts';
 
 type CallRow = typeof serviceCalls.$inferSelect;
 type CallState = CallRow['state'];
-export const OPEN_STATES: CallState[] = ['reported', 'assigned', 'on_the_way', 'on_site', 'waiting_parts', 'at_shop', 'fixed'];
-/** States in which the game is still waiting for a fix: a new report joins such a call. */
-export const UNFIXED_STATES: CallState[] = ['reported', 'assigned', 'on_the_way', 'on_site', 'waiting_parts', 'at_shop'];
 
 const tech = alias(users, 'tech');
 
@@ -107,7 +93,11 @@ export async function listCalls(tx: Tx, p: CallListParams) {
   const like = p.q ? `%${escapeLike(p.q)}%` : undefined;
   const filters: (SQL | undefined)[] = [
     eq(serviceCalls.tenantId, currentTenant),
-    p.state === 'open' ? inArray(serviceCalls.state, OPEN_STATES) : p.state === 'all' ? undefined : eq(serviceCalls.state, p.state),
+    p.state === 'open'
+      ? inArray(serviceCalls.state, [...callStateGroups.open])
+      : p.state === 'all'
+        ? undefined
+        : eq(serviceCalls.state, p.state),
     p.venueId ? eq(serviceCalls.venueId, p.venueId) : undefined,
     p.gameId ? eq(serviceCalls.gameId, p.gameId) : undefined,
     p.problem ? eq(serviceCalls.problem, p.problem) : undefined,
@@ -134,7 +124,13 @@ export async function findUnfixedCallForGame(tx: Tx, gameId: string) {
   const [c] = await tx
     .select({ id: serviceCalls.id })
     .from(serviceCalls)
-    .where(and(eq(serviceCalls.tenantId, currentTenant), eq(serviceCalls.gameId, gameId), inArray(serviceCalls.state, UNFIXED_STATES)))
+    .where(
+      and(
+        eq(serviceCalls.tenantId, currentTenant),
+        eq(serviceCalls.gameId, gameId),
+        inArray(serviceCalls.state, [...callStateGroups.unfixed]),
+      ),
+    )
     .orderBy(asc(serviceCalls.openedAt))
     .limit(1);
   return c?.id;
@@ -154,63 +150,7 @@ export async function insertCall(tx: Tx, values: Omit<typeof serviceCalls.$infer
 
 /** Applies the change only at `version` (optimistic concurrency); undefined when someone else got there first. */
 export async function updateCall(tx: Tx, id: string, version: number, patch: Partial<typeof serviceCalls.$inferInsert>) {
-  const [c] = await tx
-    .update(serviceCalls)
-    .set({ ...patch, version: sql`${serviceCalls.version} + 1`, updatedAt: new Date() })
-    .where(and(eq(serviceCalls.tenantId, currentTenant), eq(serviceCalls.id, id), eq(serviceCalls.version, version)))
-    .returning({ id: serviceCalls.id, version: serviceCalls.version });
-  return c;
-}
-
-export async function insertEvent(tx: Tx, e: Omit<typeof callEvents.$inferInsert, 'tenantId'>) {
-  await tx.insert(callEvents).values({ ...e, tenantId: sql`${currentTenant}` });
-}
-
-export async function listEvents(tx: Tx, callId: string) {
-  return tx
-    .select({
-      id: callEvents.id,
-      at: callEvents.at,
-      kind: callEvents.kind,
-      actorName: users.name,
-      actorLabel: callEvents.actorLabel,
-      fromState: callEvents.fromState,
-      toState: callEvents.toState,
-      detail: callEvents.detail,
-    })
-    .from(callEvents)
-    .leftJoin(users, eq(users.id, callEvents.actorUserId))
-    .where(and(eq(callEvents.tenantId, currentTenant), eq(callEvents.callId, callId)))
-    .orderBy(asc(callEvents.at), asc(callEvents.id));
-}
-
-export async function openDowntime(tx: Tx, gameId: string, callId: string, at: Date) {
-  const [open] = await tx
-    .select({ id: downtimeIntervals.id })
-    .from(downtimeIntervals)
-    .where(and(eq(downtimeIntervals.tenantId, currentTenant), eq(downtimeIntervals.gameId, gameId), isNull(downtimeIntervals.endedAt)));
-  if (open) return; // already down: one interval covers overlapping calls
-  await tx.insert(downtimeIntervals).values({ tenantId: sql`${currentTenant}`, gameId, callId, startedAt: at });
-}
-
-export async function closeDowntime(tx: Tx, gameId: string, at: Date) {
-  await tx
-    .update(downtimeIntervals)
-    .set({ endedAt: at })
-    .where(and(eq(downtimeIntervals.tenantId, currentTenant), eq(downtimeIntervals.gameId, gameId), isNull(downtimeIntervals.endedAt)));
-}
-
-export async function listDowntime(tx: Tx, gameId: string) {
-  return tx
-    .select({
-      id: downtimeIntervals.id,
-      callId: downtimeIntervals.callId,
-      startedAt: downtimeIntervals.startedAt,
-      endedAt: downtimeIntervals.endedAt,
-    })
-    .from(downtimeIntervals)
-    .where(and(eq(downtimeIntervals.tenantId, currentTenant), eq(downtimeIntervals.gameId, gameId)))
-    .orderBy(desc(downtimeIntervals.startedAt));
+  return updateAtVersion(tx, serviceCalls, id, version, patch);
 }
 
 export async function countUnfixedCallsForGame(tx: Tx, gameId: string, severity?: CallRow['severity']) {
@@ -221,134 +161,77 @@ export async function countUnfixedCallsForGame(tx: Tx, gameId: string, severity?
       and(
         eq(serviceCalls.tenantId, currentTenant),
         eq(serviceCalls.gameId, gameId),
-        inArray(serviceCalls.state, UNFIXED_STATES),
+        inArray(serviceCalls.state, [...callStateGroups.unfixed]),
         severity ? eq(serviceCalls.severity, severity) : undefined,
       ),
     );
   return r?.n ?? 0;
 }
 
-export async function enqueueMessage(tx: Tx, m: { channel: 'sms' | 'email'; to: string; subject?: string; body: string; callId?: string }) {
-  await tx.insert(outbox).values({
-    tenantId: sql`${currentTenant}`,
-    channel: m.channel,
-    toAddress: m.to,
-    subject: m.subject ?? '',
-    body: m.body,
-    callId: m.callId,
-  });
+/**
+ * The call a status link belongs to, in whichever company: the token names no company, so a narrow
+ * SECURITY DEFINER function (drizzle/0003_…) finds it.
+ */
+export async function findCallByStatusToken(db: Db, token: string): Promise<{ tenantId: string; callId: string } | undefined> {
+  const r = await withScope(db, {}, (tx) =>
+    tx.execute<{ tenant_id: string; call_id: string }>(sql`select * from call_by_status_token(${token})`),
+  );
+  const row = r.rows[0];
+  return row && { tenantId: row.tenant_id, callId: row.call_id };
 }
 
-export async function listCallMessages(tx: Tx, callId: string) {
+/** The technician's newest call still waiting for their answer to the assignment. */
+export async function findNewestPendingAssignment(tx: Tx, technicianId: string) {
+  const [c] = await tx
+    .select({ id: serviceCalls.id, at: serviceCalls.updatedAt })
+    .from(serviceCalls)
+    .where(
+      and(
+        eq(serviceCalls.tenantId, currentTenant),
+        eq(serviceCalls.technicianId, technicianId),
+        eq(serviceCalls.state, 'assigned'),
+        isNull(serviceCalls.acceptedAt),
+      ),
+    )
+    .orderBy(desc(serviceCalls.updatedAt))
+    .limit(1);
+  return c;
+}
+
+/** Locks the call for the rest of the transaction and reads its assignment afresh. */
+export async function lockAssignment(tx: Tx, id: string) {
+  const [c] = await tx
+    .select({ state: serviceCalls.state, technicianId: serviceCalls.technicianId, acceptedAt: serviceCalls.acceptedAt })
+    .from(serviceCalls)
+    .where(and(eq(serviceCalls.tenantId, currentTenant), eq(serviceCalls.id, id)))
+    .for('update');
+  return c;
+}
+
+/**
+ * Calls in one of `states` whose target falls by `dueBy` and that nobody was warned about yet, locked with
+ * SKIP LOCKED: a call another run is warning about right now is left to it (one warning per call).
+ */
+export async function lockCallsToWarn(tx: Tx, p: { states: readonly CallState[]; dueBy: Date }) {
   return tx
-    .select({
-      id: outbox.id,
-      channel: outbox.channel,
-      toAddress: outbox.toAddress,
-      subject: outbox.subject,
-      body: outbox.body,
-      status: outbox.status,
-      providerStatus: outbox.providerStatus,
-      createdAt: outbox.createdAt,
-      sentAt: outbox.sentAt,
-    })
-    .from(outbox)
-    .where(and(eq(outbox.tenantId, currentTenant), eq(outbox.callId, callId)))
-    .orderBy(asc(outbox.createdAt));
+    .select({ id: serviceCalls.id, targetAt: serviceCalls.targetAt })
+    .from(serviceCalls)
+    .where(
+      and(
+        eq(serviceCalls.tenantId, currentTenant),
+        inArray(serviceCalls.state, [...p.states]),
+        isNull(serviceCalls.warnedAt),
+        lte(serviceCalls.targetAt, p.dueBy),
+      ),
+    )
+    .orderBy(serviceCalls.targetAt)
+    .for('update', { skipLocked: true });
 }
 
-export async function getSettings(tx: Tx) {
-  const [s] = await tx.select().from(tenantSettings).where(eq(tenantSettings.tenantId, currentTenant));
-  if (s) return s;
-  const [created] = await tx
-    .insert(tenantSettings)
-    .values({ tenantId: sql`${currentTenant}` })
-    .onConflictDoNothing()
-    .returning();
-  return created ?? (await tx.select().from(tenantSettings).where(eq(tenantSettings.tenantId, currentTenant)))[0]!;
-}
-
-export async function updateSettings(tx: Tx, patch: Partial<typeof tenantSettings.$inferInsert>) {
-  await getSettings(tx);
-  const [s] = await tx.update(tenantSettings).set(patch).where(eq(tenantSettings.tenantId, currentTenant)).returning();
-  return s!;
-}
-
-/** Technicians of the company with their skills, home base, phone and open load. */
-export async function listTechnicians(tx: Tx) {
-  return tx
-    .select({
-      userId: users.id,
-      name: users.name,
-      phone: users.phone,
-      skills: sql<string[]>`coalesce(${technicianProfiles.skills}, '{}'::text[])`,
-      homeLatitude: technicianProfiles.homeLatitude,
-      homeLongitude: technicianProfiles.homeLongitude,
-      openCalls: sql<number>`(select count(*)::int from service_calls c where c.tenant_id = "memberships"."tenant_id" and c.technician_id = "users"."id" and c.state in ('assigned','on_the_way','on_site','waiting_parts'))`,
-    })
-    .from(memberships)
-    .innerJoin(users, eq(users.id, memberships.userId))
-    .leftJoin(technicianProfiles, and(eq(technicianProfiles.tenantId, memberships.tenantId), eq(technicianProfiles.userId, users.id)))
-    .where(and(eq(memberships.tenantId, currentTenant), eq(memberships.role, 'technician')))
-    .orderBy(users.name);
-}
-
-export async function isTechnician(tx: Tx, userId: string) {
-  const [m] = await tx
-    .select({ role: memberships.role })
-    .from(memberships)
-    .where(and(eq(memberships.tenantId, currentTenant), eq(memberships.userId, userId)));
-  return m?.role === 'technician';
-}
-
-/** E-mail addresses of a venue's contacts (people linked to it, and the venue's own contact address). */
-export async function venueContactEmails(tx: Tx, venueId: string): Promise<string[]> {
-  const linked = await tx
-    .select({ email: users.email })
-    .from(venueContacts)
-    .innerJoin(users, eq(users.id, venueContacts.userId))
-    .where(and(eq(venueContacts.tenantId, currentTenant), eq(venueContacts.venueId, venueId)));
-  const [v] = await tx
-    .select({ email: venues.contactEmail })
-    .from(venues)
-    .where(and(eq(venues.tenantId, currentTenant), eq(venues.id, venueId)));
-  return [...new Set([...linked.map((l) => l.email.toLowerCase()), ...(v?.email ? [v.email.toLowerCase()] : [])])];
-}
-
-export async function venueIdsOfContact(tx: Tx, userId: string): Promise<string[]> {
-  const rows = await tx
-    .select({ venueId: venueContacts.venueId })
-    .from(venueContacts)
-    .where(and(eq(venueContacts.tenantId, currentTenant), eq(venueContacts.userId, userId)));
-  return rows.map((r) => r.venueId);
-}
-
-export async function insertPhoto(tx: Tx, p: Omit<typeof callPhotos.$inferInsert, 'tenantId'>) {
-  const [row] = await tx
-    .insert(callPhotos)
-    .values({ ...p, tenantId: sql`${currentTenant}` })
-    .returning({ id: callPhotos.id });
-  return row!.id;
-}
-
-export async function listPhotos(tx: Tx, callId: string) {
-  return tx
-    .select({
-      id: callPhotos.id,
-      width: callPhotos.width,
-      height: callPhotos.height,
-      createdAt: callPhotos.createdAt,
-      uploadedBy: callPhotos.uploadedBy,
-    })
-    .from(callPhotos)
-    .where(and(eq(callPhotos.tenantId, currentTenant), eq(callPhotos.callId, callId)))
-    .orderBy(asc(callPhotos.createdAt));
-}
-
-export async function getPhoto(tx: Tx, id: string) {
-  const [p] = await tx
-    .select()
-    .from(callPhotos)
-    .where(and(eq(callPhotos.tenantId, currentTenant), eq(callPhotos.id, id)));
-  return p;
+/** Bookkeeping only: the version stays, so a dispatcher editing the call meanwhile is not turned away. */
+export async function markCallWarned(tx: Tx, id: string, at: Date): Promise<void> {
+  await tx
+    .update(serviceCalls)
+    .set({ warnedAt: at })
+    .where(and(eq(serviceCalls.tenantId, currentTenant), eq(serviceCalls.id, id)));
 }

@@ -1,11 +1,12 @@
 // Game and game-model queries, scoped by the caller's tenant transaction.
-import { randomBytes } from 'node:crypto';
-import { and, eq, isNull, sql, type SQL } from 'drizzle-orm';
+import { and, eq, inArray, isNull, sql, type SQL } from 'drizzle-orm';
 import type { Tx } from '../client.ts';
 import { gameModels, games, venues } from '../schema/index.ts';
 import { currentTenant } from '../schema/rls.ts';
 import { escapeLike } from './venues.ts';
 import { decodeCursor, keysetOrder, keysetWhere, toPage, type SortKey } from './keyset.ts';
+import { newTagToken } from './game-tags.ts';
+import { updateAtVersion } from './versioned-update.ts';
 
 const sortKeys: Record<'title' | 'serial' | 'status' | 'venue' | 'createdAt', SortKey> = {
   title: { expr: sql`lower(${gameModels.title})`, type: 'text' },
@@ -86,19 +87,6 @@ export async function getGame(tx: Tx, id: string) {
   return g;
 }
 
-/** The game tag's token: for staff screens only, never in lists. */
-export async function getTagToken(tx: Tx, id: string) {
-  const [g] = await tx
-    .select({ tagToken: games.tagToken })
-    .from(games)
-    .where(and(eq(games.tenantId, currentTenant), eq(games.id, id)));
-  return g?.tagToken;
-}
-
-export function newTagToken(): string {
-  return randomBytes(18).toString('base64url');
-}
-
 export async function insertGame(tx: Tx, values: Omit<typeof games.$inferInsert, 'tenantId' | 'tagToken'>) {
   const [g] = await tx
     .insert(games)
@@ -108,12 +96,34 @@ export async function insertGame(tx: Tx, values: Omit<typeof games.$inferInsert,
 }
 
 export async function updateGame(tx: Tx, id: string, version: number, patch: Partial<typeof games.$inferInsert>) {
+  return (await updateAtVersion(tx, games, id, version, patch))?.id;
+}
+
+/** The venue a game stands at (null when in storage); undefined for no such game. */
+export async function getGameVenueId(tx: Tx, id: string) {
   const [g] = await tx
-    .update(games)
-    .set({ ...patch, version: sql`${games.version} + 1`, updatedAt: new Date() })
-    .where(and(eq(games.tenantId, currentTenant), eq(games.id, id), eq(games.version, version)))
-    .returning({ id: games.id });
-  return g?.id;
+    .select({ venueId: games.venueId })
+    .from(games)
+    .where(and(eq(games.tenantId, currentTenant), eq(games.id, id)));
+  return g?.venueId;
+}
+
+/** The active games at these venues with their status, for a venue contact's view. */
+export async function listGamesAtVenues(tx: Tx, venueIds: string[]) {
+  if (venueIds.length === 0) return [];
+  return tx
+    .select({
+      id: games.id,
+      venueId: games.venueId,
+      serial: games.serial,
+      status: games.status,
+      title: gameModels.title,
+      kind: gameModels.kind,
+    })
+    .from(games)
+    .innerJoin(gameModels, and(eq(gameModels.tenantId, games.tenantId), eq(gameModels.id, games.modelId)))
+    .where(and(eq(games.tenantId, currentTenant), inArray(games.venueId, venueIds), isNull(games.retiredAt)))
+    .orderBy(gameModels.title);
 }
 
 export async function listModels(tx: Tx) {

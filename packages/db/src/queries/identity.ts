@@ -12,6 +12,31 @@ export async function findUserByEmail(db: Db, email: string) {
   return u;
 }
 
+export async function findUserById(db: Db | Tx, id: string) {
+  const [u] = await db.select().from(users).where(eq(users.id, id));
+  return u;
+}
+
+/** A new account; undefined, with nothing written, when the address already has one. */
+export async function insertUserIfNew(tx: Tx, u: { email: string; name: string; passwordHash: string }): Promise<string | undefined> {
+  const [user] = await tx.insert(users).values(u).onConflictDoNothing().returning({ id: users.id });
+  return user?.id;
+}
+
+export async function insertUser(
+  tx: Tx,
+  u: { email: string; name: string; passwordHash: string | null; emailVerifiedAt: Date },
+): Promise<string> {
+  const [user] = await tx.insert(users).values(u).returning({ id: users.id });
+  return user!.id;
+}
+
+/** Changes the person's name or password; their id and address, or undefined for no such person. */
+export async function updateUser(db: Db | Tx, id: string, patch: { name?: string; passwordHash?: string | null }) {
+  const [u] = await db.update(users).set(patch).where(eq(users.id, id)).returning({ id: users.id, email: users.email });
+  return u;
+}
+
 export async function createSession(db: Db, userId: string): Promise<string> {
   const companies = await listCompaniesOf(db, userId);
   const [s] = await db

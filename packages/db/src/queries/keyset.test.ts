@@ -1,7 +1,8 @@
 import { sql } from 'drizzle-orm';
 import { pgTable, uuid } from 'drizzle-orm/pg-core';
 import { describe, expect, it } from 'vitest';
-import { decodeCursor, encodeCursor, InvalidCursorError, keysetWhere, type SortKey } from './keyset.ts';
+import { InvalidCursorError } from '../errors.ts';
+import { decodeCursor, encodeCursor, keysetWhere, type SortKey } from './keyset.ts';
 
 const t = pgTable('t', { id: uuid('id') });
 const ID = '6f1c2a3b-4d5e-4f60-8a7b-9c0d1e2f3a4b';

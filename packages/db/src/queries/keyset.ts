@@ -2,6 +2,7 @@
 // stable while rows are added, and deep pages cost no OFFSET scan.
 import { sql, type SQL } from 'drizzle-orm';
 import type { AnyPgColumn } from 'drizzle-orm/pg-core';
+import { InvalidCursorError } from '../errors.ts';
 
 export interface SortKey {
   /** The expression rows are ordered by (must not be NULL). */
@@ -37,12 +38,6 @@ export function decodeCursor(raw: string | undefined): Cursor | undefined {
     // fall through
   }
   throw new InvalidCursorError();
-}
-
-export class InvalidCursorError extends Error {
-  constructor() {
-    super('cursor is not one this API issued');
-  }
 }
 
 // A cursor is only decoded JSON from the client: its value must fit the sort key's type before it

@@ -1,6 +1,6 @@
 // Members of the current company and invitations to join it.
-import { and, eq, gt, isNull, sql } from 'drizzle-orm';
-import type { Tx } from '../client.ts';
+import { and, eq, gt, inArray, isNotNull, isNull, sql } from 'drizzle-orm';
+import { withScope, type Db, type Tx } from '../client.ts';
 import { invitations, memberships, users } from '../schema/index.ts';
 import { currentTenant } from '../schema/rls.ts';
 
@@ -101,19 +101,56 @@ export async function claimInvitation(tx: Tx, id: string): Promise<boolean> {
   return claimed.length > 0;
 }
 
-export type InvitationByToken = {
-  tenant_id: string;
+export interface InvitationByToken {
+  tenantId: string;
   id: string;
   email: string;
   role: Role;
-  expires_at: Date;
-  accepted_at: Date | null;
-  revoked_at: Date | null;
-  tenant_name: string;
-};
+  expiresAt: Date;
+  acceptedAt: Date | null;
+  revokedAt: Date | null;
+  tenantName: string;
+}
 
-/** Finds an invitation from its link alone (no company known yet), through a narrow definer function. */
-export async function findInvitationByTokenHash(tx: Tx, tokenHash: string): Promise<InvitationByToken | undefined> {
-  const r = await tx.execute<InvitationByToken>(sql`select * from invitation_by_token_hash(${tokenHash})`);
-  return r.rows[0];
+/**
+ * Finds an invitation from its link alone: no company is known yet, so a narrow SECURITY DEFINER
+ * function (drizzle/0001_…) looks it up by the token's hash.
+ */
+export async function findInvitationByTokenHash(db: Db, tokenHash: string): Promise<InvitationByToken | undefined> {
+  const r = await withScope(db, {}, (tx) =>
+    tx.execute<{
+      tenant_id: string;
+      id: string;
+      email: string;
+      role: Role;
+      expires_at: string | Date;
+      accepted_at: string | Date | null;
+      revoked_at: string | Date | null;
+      tenant_name: string;
+    }>(sql`select * from invitation_by_token_hash(${tokenHash})`),
+  );
+  const row = r.rows[0];
+  const at = (v: string | Date | null) => (v === null ? null : new Date(v));
+  return (
+    row && {
+      tenantId: row.tenant_id,
+      id: row.id,
+      email: row.email,
+      role: row.role,
+      expiresAt: new Date(row.expires_at),
+      acceptedAt: at(row.accepted_at),
+      revokedAt: at(row.revoked_at),
+      tenantName: row.tenant_name,
+    }
+  );
+}
+
+/** The mobile numbers of the company's members in these roles (those who gave one). */
+export async function listMemberPhones(tx: Tx, roles: Role[]): Promise<string[]> {
+  const rows = await tx
+    .select({ phone: users.phone })
+    .from(memberships)
+    .innerJoin(users, eq(users.id, memberships.userId))
+    .where(and(eq(memberships.tenantId, currentTenant), inArray(memberships.role, roles), isNotNull(users.phone)));
+  return rows.map((r) => r.phone ?? '');
 }

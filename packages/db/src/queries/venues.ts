@@ -1,10 +1,11 @@
 // Venue queries. Every function takes the tenant-scoped transaction: row-level security confines it
 // to the current company, and the explicit tenant filters keep the indexes in play.
-import { and, eq, isNull, sql, type SQL } from 'drizzle-orm';
+import { and, eq, inArray, isNull, sql, type SQL } from 'drizzle-orm';
 import type { Tx } from '../client.ts';
 import { games, venues } from '../schema/index.ts';
 import { currentTenant } from '../schema/rls.ts';
 import { decodeCursor, keysetOrder, keysetWhere, toPage, type SortKey } from './keyset.ts';
+import { updateAtVersion } from './versioned-update.ts';
 
 const sortKeys: Record<'name' | 'city' | 'createdAt', SortKey> = {
   name: { expr: sql`lower(${venues.name})`, type: 'text' },
@@ -61,12 +62,16 @@ export async function insertVenue(tx: Tx, values: Omit<typeof venues.$inferInser
 
 /** Applies the change only when the row is still at `version`; undefined when it moved on (or is gone). */
 export async function updateVenue(tx: Tx, id: string, version: number, patch: Partial<typeof venues.$inferInsert>) {
-  const [v] = await tx
-    .update(venues)
-    .set({ ...patch, version: sql`${venues.version} + 1`, updatedAt: new Date() })
-    .where(and(eq(venues.tenantId, currentTenant), eq(venues.id, id), eq(venues.version, version)))
-    .returning({ id: venues.id });
-  return v?.id;
+  return (await updateAtVersion(tx, venues, id, version, patch))?.id;
+}
+
+/** Name and address of each of these venues (a venue contact's own), in no particular order. */
+export async function listVenueSummaries(tx: Tx, ids: string[]) {
+  if (ids.length === 0) return [];
+  return tx
+    .select({ id: venues.id, name: venues.name, addressLine: venues.addressLine, city: venues.city })
+    .from(venues)
+    .where(and(eq(venues.tenantId, currentTenant), inArray(venues.id, ids)));
 }
 
 export const venueColumns = {

@@ -1,16 +1,13 @@
+// Game models (maker and title) and the games themselves, each with its game tag's secret.
 import { sql } from 'drizzle-orm';
-import { date, foreignKey, index, integer, pgTable, primaryKey, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { date, foreignKey, index, integer, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { gameKind, gameStatus } from './enums.ts';
-import { tenants } from './tenancy.ts';
 import { venues } from './venues.ts';
-import { tenantIsolation } from './rls.ts';
+import { tenantTable } from './tenant-table.ts';
 
-export const gameModels = pgTable(
+export const gameModels = tenantTable(
   'game_models',
   {
-    tenantId: uuid('tenant_id')
-      .notNull()
-      .references(() => tenants.id, { onDelete: 'cascade' }),
     id: uuid('id').notNull().defaultRandom(),
     maker: text('maker').notNull(),
     title: text('title').notNull(),
@@ -18,19 +15,12 @@ export const gameModels = pgTable(
     year: integer('year'),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [
-    primaryKey({ columns: [t.tenantId, t.id] }),
-    uniqueIndex('game_models_tenant_maker_title_key').on(t.tenantId, t.maker, t.title),
-    tenantIsolation(t.tenantId),
-  ],
-).enableRLS();
+  (t) => [uniqueIndex('game_models_tenant_maker_title_key').on(t.tenantId, t.maker, t.title)],
+);
 
-export const games = pgTable(
+export const games = tenantTable(
   'games',
   {
-    tenantId: uuid('tenant_id')
-      .notNull()
-      .references(() => tenants.id, { onDelete: 'cascade' }),
     id: uuid('id').notNull().defaultRandom(),
     modelId: uuid('model_id').notNull(),
     venueId: uuid('venue_id'),
@@ -47,7 +37,6 @@ export const games = pgTable(
     retiredAt: timestamp('retired_at', { withTimezone: true }),
   },
   (t) => [
-    primaryKey({ columns: [t.tenantId, t.id] }),
     foreignKey({ columns: [t.tenantId, t.modelId], foreignColumns: [gameModels.tenantId, gameModels.id] }),
     foreignKey({ columns: [t.tenantId, t.venueId], foreignColumns: [venues.tenantId, venues.id] }),
     uniqueIndex('games_tag_token_key').on(t.tagToken),
@@ -55,6 +44,5 @@ export const games = pgTable(
     index('games_tenant_venue_idx').on(t.tenantId, t.venueId),
     index('games_tenant_created_idx').on(t.tenantId, t.createdAt, t.id),
     index('games_tenant_serial_idx').on(t.tenantId, sql`lower(${t.serial})`),
-    tenantIsolation(t.tenantId),
   ],
-).enableRLS();
+);

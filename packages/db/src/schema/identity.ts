@@ -53,12 +53,6 @@ export const emailTokens = pgTable('email_tokens', {
   usedAt: timestamp('used_at', { withTimezone: true }),
 });
 
-/** Numbers that texted STOP: nothing is sent to them until they text START (carrier rules, any company). */
-export const smsOptOuts = pgTable('sms_opt_outs', {
-  phone: text('phone').primaryKey(),
-  optedOutAt: timestamp('opted_out_at', { withTimezone: true }).notNull().defaultNow(),
-});
-
 export const platformAdmins = pgTable('platform_admins', {
   userId: uuid('user_id')
     .primaryKey()

@@ -1,7 +1,7 @@
 // Row-level security helpers. Every tenant-owned table carries tenant_id and one policy that
 // compares it with the transaction-local setting app.tenant_id. A missing setting reads as ''
 // after a transaction ends, so nullif(...) turns it into NULL and the comparison matches nothing.
-import { sql, type SQL } from 'drizzle-orm';
+import { sql } from 'drizzle-orm';
 import { pgPolicy, type AnyPgColumn } from 'drizzle-orm/pg-core';
 
 export const currentTenant = sql`nullif(current_setting('app.tenant_id', true), '')::uuid`;
@@ -16,8 +16,4 @@ export function tenantIsolation(tenantId: AnyPgColumn) {
     using: sql`${tenantId} = ${currentTenant}`,
     withCheck: sql`${tenantId} = ${currentTenant}`,
   });
-}
-
-export function tenantMatches(tenantId: AnyPgColumn): SQL {
-  return sql`${tenantId} = ${currentTenant}`;
 }

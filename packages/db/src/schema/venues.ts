@@ -1,17 +1,15 @@
+// Venues (the places games stand) and the venue contacts who speak for them.
 import { sql } from 'drizzle-orm';
-import { doublePrecision, index, integer, jsonb, pgTable, primaryKey, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { tenants } from './tenancy.ts';
-import { tenantIsolation } from './rls.ts';
+import { doublePrecision, foreignKey, index, integer, jsonb, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { users } from './identity.ts';
+import { tenantTable } from './tenant-table.ts';
 
 /** Opening hours per ISO weekday (1 = Monday … 7 = Sunday), "HH:MM" local time; close may pass midnight. */
 export type OpeningHours = Partial<Record<'1' | '2' | '3' | '4' | '5' | '6' | '7', { open: string; close: string }[]>>;
 
-export const venues = pgTable(
+export const venues = tenantTable(
   'venues',
   {
-    tenantId: uuid('tenant_id')
-      .notNull()
-      .references(() => tenants.id, { onDelete: 'cascade' }),
     id: uuid('id').notNull().defaultRandom(),
     name: text('name').notNull(),
     addressLine: text('address_line').notNull(),
@@ -30,9 +28,23 @@ export const venues = pgTable(
     retiredAt: timestamp('retired_at', { withTimezone: true }),
   },
   (t) => [
-    primaryKey({ columns: [t.tenantId, t.id] }),
     index('venues_tenant_name_idx').on(t.tenantId, sql`lower(${t.name})`, t.id),
     index('venues_tenant_created_idx').on(t.tenantId, t.createdAt, t.id),
-    tenantIsolation(t.tenantId),
   ],
-).enableRLS();
+);
+
+/** Which venue a venue contact speaks for. */
+export const venueContacts = tenantTable(
+  'venue_contacts',
+  {
+    venueId: uuid('venue_id').notNull(),
+    userId: uuid('user_id')
+      .notNull()
+      .references(() => users.id, { onDelete: 'cascade' }),
+  },
+  (t) => [
+    foreignKey({ columns: [t.tenantId, t.venueId], foreignColumns: [venues.tenantId, venues.id] }).onDelete('cascade'),
+    index('venue_contacts_user_idx').on(t.tenantId, t.userId),
+  ],
+  { key: (t) => [t.venueId, t.userId] },
+);

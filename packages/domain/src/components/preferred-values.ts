@@ -26,9 +26,6 @@ const SERIES: Readonly<Record<ESeries, readonly number[]>> = {
   E96: geometricSeries(96),
 };
 
-/** The tolerance each series was built for (IEC 60063): neighbouring values' windows just meet. */
-export const SERIES_TOLERANCE_PERCENT: Readonly<Record<ESeries, number>> = { E6: 20, E12: 10, E24: 5, E48: 2, E96: 1 };
-
 export const E_SERIES: readonly ESeries[] = ['E6', 'E12', 'E24', 'E48', 'E96'];
 
 function requireSeries(series: ESeries): readonly number[] {

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { Link } from 'react-router-dom';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 
 /** The frame of the signed-out pages: our mark, a card, and a short line about the product. */
 export function AuthLayout({ title, children, footer }: { title: string; children: ReactNode; footer?: ReactNode }) {

@@ -5,22 +5,16 @@ import { z } from 'zod';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { useQuery, useQueryClient } from '@tanstack/react-query';
 import { password } from '@bumperline/contracts/auth';
-import { roleLabels, type Role } from '@bumperline/contracts/roles';
+import { roleLabels } from '@bumperline/contracts/roles';
+import type { InvitationInfo } from '@bumperline/contracts/team';
 import { Field, inputClass } from '../../components/field.tsx';
 import { applyServerErrors, fieldMessage } from '../../components/form-errors.ts';
 import { ErrorState, Loading } from '../../components/states.tsx';
 import { get, post } from '../../lib/api-client.ts';
 import { signInWithPassword } from '../../lib/auth-client.ts';
 import { useMe } from '../../api/me.ts';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { AuthLayout, FormAlert } from './auth-layout.tsx';
-
-interface InvitationInfo {
-  companyName: string;
-  email: string;
-  role: Role;
-  hasAccount: boolean;
-}
 
 const newAccount = z.object({ name: z.string().trim().min(1, { error: 'is required' }).max(120), password });
 

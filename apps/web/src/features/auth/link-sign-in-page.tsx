@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
 import { signInWithLink } from '../../lib/auth-client.ts';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { AuthLayout, FormAlert } from './auth-layout.tsx';
 
 export function LinkSignInPage() {

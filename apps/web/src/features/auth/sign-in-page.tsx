@@ -8,7 +8,7 @@ import { email } from '@bumperline/contracts/auth';
 import { Field, inputClass } from '../../components/field.tsx';
 import { fieldMessage } from '../../components/form-errors.ts';
 import { signInWithPassword, type PasswordSignInResult } from '../../lib/auth-client.ts';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { AuthLayout, FormAlert } from './auth-layout.tsx';
 import { ResendConfirmation } from './resend-confirmation.tsx';
 

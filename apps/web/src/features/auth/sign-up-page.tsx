@@ -7,7 +7,7 @@ import { signUpInput } from '@bumperline/contracts/auth';
 import { Field, inputClass } from '../../components/field.tsx';
 import { applyServerErrors, fieldMessage } from '../../components/form-errors.ts';
 import { post } from '../../lib/api-client.ts';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { AuthLayout, FormAlert } from './auth-layout.tsx';
 import { ResendConfirmation } from './resend-confirmation.tsx';
 

@@ -3,7 +3,7 @@
 import { useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
 import { ApiError, post } from '../../lib/api-client.ts';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { AuthLayout, FormAlert } from './auth-layout.tsx';
 
 export function VerifyEmailPage() {

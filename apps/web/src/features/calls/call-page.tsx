@@ -6,10 +6,12 @@ import { Camera, MessageSquare, Send, UserMinus, UserPlus } from 'lucide-react';
 import {
   callRef,
   callStateLabels,
+  inStateGroup,
   problemLabels,
   severities,
   severityLabels,
   transitions,
+  type CallDetail,
   type CallEvent,
   type CallState,
   type ServiceCall,
@@ -20,7 +22,7 @@ import { CallStateBadge } from '../../components/call-state-badge.tsx';
 import { TargetClock } from '../../components/target-clock.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { inputClass } from '../../components/field.tsx';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings, useMe } from '../../api/me.ts';
 import {
@@ -31,7 +33,6 @@ import {
   useRankedTechnicians,
   useSetSeverity,
   useTransitionCall,
-  type CallDetail,
 } from '../../api/calls.ts';
 import { ApiError } from '../../lib/api-client.ts';
 import { formatDateTime } from '../../lib/format.ts';
@@ -275,7 +276,7 @@ function Timeline({ events, locale }: { events: CallEvent[]; locale?: { locale: 
 function AssignPanel({ call, onError, onDone }: { call: ServiceCall; onError: (e: unknown) => void; onDone: () => void }) {
   const ranked = useRankedTechnicians(call.id, true);
   const assign = useAssignCall(call.id);
-  const assignable = ['reported', 'assigned', 'on_the_way'].includes(call.state);
+  const assignable = inStateGroup('awaitingArrival', call.state);
   if (!assignable) return null;
   return (
     <section className="card grid gap-2" aria-labelledby="assign">

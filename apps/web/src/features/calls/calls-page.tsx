@@ -1,6 +1,5 @@
 // Dispatch: open calls in a table and on a map side by side, with their age against the response target.
 import { Link } from 'react-router-dom';
-import { useQuery } from '@tanstack/react-query';
 import { callRef, callStateLabels, callStates, problemKinds, problemLabels, type ServiceCall } from '@bumperline/contracts/calls';
 import { DataTable, type Column } from '../../components/data-table.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
@@ -9,12 +8,11 @@ import { TargetClock, useNow } from '../../components/target-clock.tsx';
 import { CallsMap } from '../../components/calls-map.tsx';
 import { pagedTableProps, useListParams } from '../../components/use-list-params.ts';
 import { FilterSelect } from '../../components/filter-select.tsx';
-import { paths } from '../../app/paths.ts';
-import { allCalls, useCalls } from '../../api/calls.ts';
+import { paths } from '../../lib/paths.ts';
+import { allCalls, useCalls, useTechnicians } from '../../api/calls.ts';
 import { useSettings } from '../../api/settings.ts';
 import { useVenues } from '../../api/venues.ts';
 import { useCan } from '../../api/use-can.ts';
-import { get } from '../../lib/api-client.ts';
 
 type Sort = 'targetAt' | 'openedAt';
 
@@ -65,11 +63,7 @@ export function CallsPage() {
   const mapCalls = useCalls({ ...query, cursor: undefined, limit: 200 });
   const settings = useSettings();
   const venues = useVenues({ limit: 200, sort: 'name', order: 'asc' });
-  const technicians = useQuery({
-    queryKey: ['technicians'],
-    queryFn: () => get<{ items: { userId: string; name: string }[] }>('/api/technicians'),
-    enabled: canDispatch,
-  });
+  const technicians = useTechnicians(canDispatch);
   const now = useNow();
   const points = (mapCalls.data?.items ?? [])
     .filter((c) => c.latitude !== null && c.longitude !== null)

@@ -17,7 +17,7 @@ import { PageHeader } from '../../components/page-header.tsx';
 import { ErrorState, Loading } from '../../components/states.tsx';
 import { applyServerErrors, fieldMessage } from '../../components/form-errors.ts';
 import { ApiError } from '../../lib/api-client.ts';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { useCreateModel, useGame, useModels, useSaveGame } from '../../api/games.ts';
 import { useVenues } from '../../api/venues.ts';
 

@@ -3,9 +3,9 @@ import { Archive, Pencil } from 'lucide-react';
 import { gameKindLabels } from '@bumperline/contracts/games';
 import { PageHeader } from '../../components/page-header.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
-import { StatusBadge } from '../../components/status-badge.tsx';
+import { GameStatusBadge } from '../../components/game-status-badge.tsx';
 import { ActivitySection } from '../../components/activity-section.tsx';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings } from '../../api/me.ts';
 import { useGame, useGameDowntime, useRegenerateTag, useRetireGame } from '../../api/games.ts';
@@ -36,7 +36,7 @@ export function GamePage() {
         title={g.model.title}
         subtitle={
           <span className="inline-flex flex-wrap items-center gap-2">
-            <StatusBadge status={g.status} /> {g.model.maker} · {gameKindLabels[g.model.kind]} · serial{' '}
+            <GameStatusBadge status={g.status} /> {g.model.maker} · {gameKindLabels[g.model.kind]} · serial{' '}
             <span className="tabular">{g.serial}</span>
             {g.retiredAt && <strong className="text-down">Retired {formatDate(g.retiredAt, locale)}</strong>}
           </span>

@@ -3,10 +3,10 @@ import { Plus } from 'lucide-react';
 import { gameKindLabels, gameKinds, gameStatusLabels, gameStatuses, type Game } from '@bumperline/contracts/games';
 import { DataTable, type Column } from '../../components/data-table.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
-import { StatusBadge } from '../../components/status-badge.tsx';
+import { GameStatusBadge } from '../../components/game-status-badge.tsx';
 import { pagedTableProps, useListParams } from '../../components/use-list-params.ts';
 import { FilterSelect } from '../../components/filter-select.tsx';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { allGames, useGames } from '../../api/games.ts';
 
@@ -32,7 +32,7 @@ const columns: Column<Game, Sort>[] = [
     cell: (g) => g.venueName ?? <span className="text-ink-muted">Not placed</span>,
     csv: (g) => g.venueName,
   },
-  { header: 'Status', sort: 'status', cell: (g) => <StatusBadge status={g.status} />, csv: (g) => gameStatusLabels[g.status] },
+  { header: 'Status', sort: 'status', cell: (g) => <GameStatusBadge status={g.status} />, csv: (g) => gameStatusLabels[g.status] },
 ];
 
 export function GamesPage() {

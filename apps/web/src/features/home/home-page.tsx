@@ -2,9 +2,9 @@
 import { Link } from 'react-router-dom';
 import { gameStatusLabels, gameStatuses } from '@bumperline/contracts/games';
 import { PageHeader } from '../../components/page-header.tsx';
-import { StatusBadge } from '../../components/status-badge.tsx';
+import { GameStatusBadge } from '../../components/game-status-badge.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { useMe } from '../../api/me.ts';
 import { useGameSummary, useGames } from '../../api/games.ts';
 import { useCalls } from '../../api/calls.ts';
@@ -37,7 +37,7 @@ function TodayPage({ firstName }: { firstName: string }) {
             {gameStatuses.map((s) => (
               <li key={s}>
                 <Link to={`${paths.games}?status=${s}`} className="card flex flex-col gap-2 hover:border-ink">
-                  <StatusBadge status={s} />
+                  <GameStatusBadge status={s} />
                   <span className="text-3xl font-extrabold tabular">{summary.data?.byStatus[s] ?? 0}</span>
                   <span className="sr-only">{gameStatusLabels[s]} games</span>
                 </Link>

@@ -1,7 +1,7 @@
 // What anyone sees at / before signing in: what Bumperline does, and the way in.
 import { Link } from 'react-router-dom';
 import { BellRing, CalendarCheck, ChartLine, Coins, MapPinned, Wrench } from 'lucide-react';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 
 const points = [
   {

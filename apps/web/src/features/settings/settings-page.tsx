@@ -6,7 +6,8 @@ import { Field, inputClass } from '../../components/field.tsx';
 import { applyServerErrors } from '../../components/form-errors.ts';
 import { ErrorState, Loading } from '../../components/states.tsx';
 import { severities, severityLabels } from '@bumperline/contracts/calls';
-import { useSaveSettings, useSettings, type CompanySettings } from '../../api/settings.ts';
+import type { CompanySettings } from '@bumperline/contracts/settings';
+import { useSaveSettings, useSettings } from '../../api/settings.ts';
 
 export function SettingsPage() {
   const settings = useSettings();

@@ -3,7 +3,7 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import type { z } from 'zod';
 import { UserPlus } from 'lucide-react';
-import { invitationInput } from '@bumperline/contracts/auth';
+import { invitationInput } from '@bumperline/contracts/team';
 import { roleLabels, roles, type Role } from '@bumperline/contracts/roles';
 import { PageHeader } from '../../components/page-header.tsx';
 import { Field, inputClass } from '../../components/field.tsx';

@@ -1,16 +1,17 @@
 // The venue view: a bar owner's games and their status, their calls and how far along they are,
 // and reporting a problem — phone-first, big touch targets.
 import { useState } from 'react';
-import { problemKinds, problemLabels, type ProblemKind, type ServiceCall } from '@bumperline/contracts/calls';
+import { problemKinds, problemLabels, type ProblemKind } from '@bumperline/contracts/calls';
+import type { VenueView, VenueViewCall } from '@bumperline/contracts/venue-view';
 import { PageHeader } from '../../components/page-header.tsx';
-import { StatusBadge } from '../../components/status-badge.tsx';
+import { GameStatusBadge } from '../../components/game-status-badge.tsx';
 import { CallStateBadge } from '../../components/call-state-badge.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { inputClass } from '../../components/field.tsx';
 import { formatDateTime } from '../../lib/format.ts';
 import { ApiError } from '../../lib/api-client.ts';
 import { useLocaleSettings, useMe } from '../../api/me.ts';
-import { useVenueReport, useVenueView, type VenueView } from '../../api/venue-view.ts';
+import { useVenueReport, useVenueView } from '../../api/venue-view.ts';
 
 export function VenueViewPage() {
   const view = useVenueView();
@@ -61,7 +62,7 @@ function GamesList({ view }: { view: VenueView }) {
                 <span>
                   <span className="font-bold">{g.title}</span> <span className="text-sm text-ink-muted tabular">· {g.serial}</span>
                 </span>
-                <StatusBadge status={g.status} />
+                <GameStatusBadge status={g.status} />
               </div>
               {reporting === g.id ? (
                 <ReportForm gameId={g.id} title={g.title} onClose={() => setReporting(null)} />
@@ -151,7 +152,7 @@ function ReportForm({ gameId, title, onClose }: { gameId: string; title: string;
   );
 }
 
-function CallsList({ title, calls, empty }: { title: string; calls: ServiceCall[]; empty: string }) {
+function CallsList({ title, calls, empty }: { title: string; calls: VenueViewCall[]; empty: string }) {
   const locale = useLocaleSettings();
   return (
     <section className="card" aria-label={title}>

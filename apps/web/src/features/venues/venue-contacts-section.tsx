@@ -3,7 +3,7 @@ import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { inputClass } from '../../components/field.tsx';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLinkVenueContact, useVenueContacts } from '../../api/venues.ts';
 

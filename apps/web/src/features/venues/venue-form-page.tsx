@@ -9,7 +9,7 @@ import { PageHeader } from '../../components/page-header.tsx';
 import { ErrorState, Loading } from '../../components/states.tsx';
 import { applyServerErrors, fieldMessage } from '../../components/form-errors.ts';
 import { ApiError } from '../../lib/api-client.ts';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { useSaveVenue, useVenue } from '../../api/venues.ts';
 
 type FormIn = z.input<typeof venueInput>;

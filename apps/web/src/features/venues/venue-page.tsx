@@ -2,10 +2,10 @@ import { Link, useParams } from 'react-router-dom';
 import { Archive, MapPin, Pencil, Phone, Mail, QrCode } from 'lucide-react';
 import { PageHeader } from '../../components/page-header.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
-import { StatusBadge } from '../../components/status-badge.tsx';
+import { GameStatusBadge } from '../../components/game-status-badge.tsx';
 import { ActivitySection } from '../../components/activity-section.tsx';
 import { VenueContactsSection } from './venue-contacts-section.tsx';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings } from '../../api/me.ts';
 import { useRetireVenue, useVenue } from '../../api/venues.ts';
@@ -81,7 +81,7 @@ export function VenuePage() {
                   <Link className="link" to={paths.game(g.id)}>
                     {g.model.title} <span className="font-normal text-ink-muted">· {g.serial}</span>
                   </Link>
-                  <StatusBadge status={g.status} />
+                  <GameStatusBadge status={g.status} />
                 </li>
               ))}
             </ul>

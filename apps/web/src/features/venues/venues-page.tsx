@@ -4,7 +4,7 @@ import type { Venue } from '@bumperline/contracts/venues';
 import { DataTable, type Column } from '../../components/data-table.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
 import { pagedTableProps, useListParams } from '../../components/use-list-params.ts';
-import { paths } from '../../app/paths.ts';
+import { paths } from '../../lib/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { allVenues, useVenues } from '../../api/venues.ts';
 

@@ -23,6 +23,4 @@ export const paths = {
   settings: '/settings',
   team: '/team',
   activity: '/activity',
-  account: '/account',
-  venueView: '/my-venue',
 } as const;

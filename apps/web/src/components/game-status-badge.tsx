@@ -9,7 +9,7 @@ const styles: Record<GameStatus, { className: string; Icon: typeof CircleCheck }
   in_shop: { className: 'bg-shop-tint text-shop', Icon: Wrench },
 };
 
-export function StatusBadge({ status }: { status: GameStatus }) {
+export function GameStatusBadge({ status }: { status: GameStatus }) {
   const { className, Icon } = styles[status];
   return (
     <span className={`inline-flex items-center gap-1 rounded-full px-2.5 py-0.5 text-sm font-semibold whitespace-nowrap ${className}`}>

@@ -1,0 +1,44 @@
+// The company's dispatch settings: response targets per severity, warning lead, map tiles, dispatch phone.
+import { z } from 'zod';
+import { uuid } from './common.ts';
+import { phoneNumber } from './phone.ts';
+
+const minutes = z
+  .number()
+  .int()
+  .min(5, { error: 'must be at least 5 minutes' })
+  .max(60 * 24 * 30);
+
+export const settingsUpdate = z.strictObject({
+  responseTargets: z.strictObject({ down: minutes, fault: minutes, cosmetic: minutes }).optional(),
+  warnBeforeMinutes: z
+    .number()
+    .int()
+    .min(0)
+    .max(24 * 60)
+    .optional(),
+  mapTileUrl: z
+    .union([
+      z.literal(''),
+      z
+        .string()
+        .url()
+        .max(300)
+        .regex(/^https?:\/\//, { error: 'must start with https:// or http://' })
+        .regex(/\{z\}.*\{x\}.*\{y\}/, { error: 'must contain {z}, {x} and {y}' }),
+    ])
+    .optional(),
+  dispatchPhone: z.union([z.literal(''), phoneNumber]).optional(),
+});
+export type SettingsUpdate = z.input<typeof settingsUpdate>;
+
+export const companySettings = z.strictObject({
+  tenantId: uuid,
+  /** Minutes from a report to the technician's arrival, per severity. */
+  responseTargets: z.strictObject({ down: z.number().int(), fault: z.number().int(), cosmetic: z.number().int() }),
+  warnBeforeMinutes: z.number().int(),
+  /** Empty: no tiles are fetched, the map shows markers on a plain background. */
+  mapTileUrl: z.string(),
+  dispatchPhone: z.string(),
+});
+export type CompanySettings = z.infer<typeof companySettings>;

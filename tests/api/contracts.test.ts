@@ -1,0 +1,558 @@
+// Every endpoint under /api against the contract the web app is typed from (packages/contracts): each is
+// called once with real rows, and its actual answer must parse with its response schema. The schemas are
+// strict objects, so a field the contract does not name (a new column, a leaked secret) fails here as
+// surely as a missing or mistyped one. Endpoints that answer no JSON say so in the table.
+// A new /api route fails this file until it is added to the table below.
+import { randomBytes } from 'node:crypto';
+import { mkdtemp, rm } from 'node:fs/promises';
+import os from 'node:os';
+import path from 'node:path';
+import request, { type Response } from 'supertest';
+import sharp from 'sharp';
+import { z } from 'zod';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { and, eq } from 'drizzle-orm';
+import { activityPage } from '@bumperline/contracts/activity';
+import { mailSentIfKnown, me, signUpAnswered } from '@bumperline/contracts/auth';
+import {
+  callDetail,
+  callPage,
+  noteAdded,
+  openedCall,
+  rankedTechnicianList,
+  serviceCall,
+  technicianList,
+} from '@bumperline/contracts/calls';
+import { problemDetails } from '@bumperline/contracts/common';
+import { company as companyResponse } from '@bumperline/contracts/company';
+import {
+  downtimeList,
+  game,
+  gameDetail,
+  gameModel,
+  gameModelList,
+  gamePage,
+  gameSummary,
+  tagRegenerated,
+} from '@bumperline/contracts/games';
+import { health } from '@bumperline/contracts/health';
+import { companySettings } from '@bumperline/contracts/settings';
+import { invitationAccepted, invitationInfo, invitationSent, memberRoleChanged, team } from '@bumperline/contracts/team';
+import { venueReportOpened, venueView } from '@bumperline/contracts/venue-view';
+import { venue, venueContactList, venueContactsLinked, venuePage } from '@bumperline/contracts/venues';
+import { withScope } from '@bumperline/db/client';
+import { issueEmailToken } from '@bumperline/db/queries/email-tokens';
+import { insertInvitation } from '@bumperline/db/queries/team';
+import { linkVenueContact } from '@bumperline/db/queries/venue-contacts';
+import { callPhotos, games, serviceCalls, venues } from '@bumperline/db/schema/index';
+import { newToken } from '@bumperline/api/auth/tokens';
+import { folderPhotoStore } from '@bumperline/api/services/photo-store';
+import { buildTestApp, JSON_HEADERS, signedInAgent, type Agent, type TestApp } from '../support/app.ts';
+import { addGame, addMember, assignServiceCall, openServiceCall } from '../support/call-factories.ts';
+import { createUser } from '../support/factories.ts';
+import { createFullCompany, type FullCompany } from '../support/full-company.ts';
+import { listRoutes } from '../support/route-list.ts';
+
+type Caller = 'owner' | 'technician' | 'venue_contact' | 'signed-out';
+
+interface Endpoint {
+  /** Who calls it: the owner may do everything staff can; the others own what only they can do. */
+  as: Caller;
+  /** The request, with real ids; rows it changes are made fresh for it. */
+  probe: (agent: Agent) => PromiseLike<Response>;
+  status: number;
+  /** The response schema from the contracts; or no body (204), or a page or a file rather than JSON. */
+  answer: z.ZodType | 'no-content' | 'html' | 'image';
+}
+
+let t: TestApp;
+let photoDir: string;
+let company: FullCompany;
+const agents = {} as Record<Caller, Agent>;
+/** A report with a photo sent through the game-tag page, so that the app's own photo store holds the file. */
+let reported: { callId: string; photoId: string };
+
+let serial = 0;
+const unique = (prefix: string) => `${prefix}-${++serial}-${randomBytes(3).toString('hex')}`;
+const asOwner = () => ({ tenantId: company.tenantId, userId: company.ownerId });
+const DAY_MS = 24 * 3600_000;
+
+async function freshVenue(): Promise<string> {
+  const [v] = await t.db.owner
+    .insert(venues)
+    .values({
+      tenantId: company.tenantId,
+      name: unique('Venue'),
+      addressLine: '9 Probe Street',
+      city: 'Testville',
+      latitude: 41.9,
+      longitude: -87.6,
+    })
+    .returning({ id: venues.id });
+  return v!.id;
+}
+
+async function freshInvitation(): Promise<{ id: string; token: string }> {
+  const { token, hash } = newToken();
+  const id = await withScope(t.db.app, asOwner(), (tx) =>
+    insertInvitation(tx, {
+      email: `${unique('invited')}@example.test`,
+      role: 'technician',
+      tokenHash: hash,
+      invitedBy: company.ownerId,
+      expiresAt: new Date(Date.now() + DAY_MS),
+    }),
+  );
+  return { id, token };
+}
+
+/** The token of a link we would have mailed to a new person (whose address nobody has confirmed yet). */
+async function freshEmailToken(purpose: 'verify-email' | 'password-reset'): Promise<string> {
+  const user = await createUser(t.db.owner, { emailVerifiedAt: null });
+  return issueEmailToken(t.db.app, user.id, purpose, DAY_MS);
+}
+
+const freshCall = () => openServiceCall(t.db, company, { problem: 'no_sound' });
+
+/** A new call assigned to the company's technician, and its version after the assignment. */
+async function freshAssignedCall(): Promise<{ id: string; version: number }> {
+  const id = await freshCall();
+  const view = await assignServiceCall(t.db, company, id, company.technician.id);
+  return { id, version: view.version };
+}
+
+const endpoints: Record<string, Endpoint> = {
+  // No sign-in.
+  'GET /api/health': { as: 'signed-out', status: 200, answer: health, probe: (a) => a.get('/api/health') },
+  'POST /api/account/sign-up': {
+    as: 'signed-out',
+    status: 202,
+    answer: signUpAnswered,
+    probe: (a) =>
+      a
+        .post('/api/account/sign-up')
+        .set(JSON_HEADERS)
+        .send({
+          companyName: unique('Company'),
+          name: 'New Owner',
+          email: `${unique('owner')}@example.test`,
+          password: 'a long enough passphrase',
+        }),
+  },
+  'POST /api/account/verify-email': {
+    as: 'signed-out',
+    status: 204,
+    answer: 'no-content',
+    probe: async (a) =>
+      a
+        .post('/api/account/verify-email')
+        .set(JSON_HEADERS)
+        .send({ token: await freshEmailToken('verify-email') }),
+  },
+  'POST /api/account/verify-email/resend': {
+    as: 'signed-out',
+    status: 202,
+    answer: mailSentIfKnown,
+    probe: (a) => a.post('/api/account/verify-email/resend').set(JSON_HEADERS).send({ email: company.dispatcher.email }),
+  },
+  'POST /api/account/password-reset': {
+    as: 'signed-out',
+    status: 202,
+    answer: mailSentIfKnown,
+    probe: (a) => a.post('/api/account/password-reset').set(JSON_HEADERS).send({ email: company.dispatcher.email }),
+  },
+  'POST /api/account/password-reset/confirm': {
+    as: 'signed-out',
+    status: 204,
+    answer: 'no-content',
+    probe: async (a) =>
+      a
+        .post('/api/account/password-reset/confirm')
+        .set(JSON_HEADERS)
+        .send({ token: await freshEmailToken('password-reset'), password: 'a long enough passphrase' }),
+  },
+  'POST /api/account/sign-in-link': {
+    as: 'signed-out',
+    status: 202,
+    answer: mailSentIfKnown,
+    probe: (a) => a.post('/api/account/sign-in-link').set(JSON_HEADERS).send({ email: company.venueContact.email }),
+  },
+  'GET /api/invitations/:token': {
+    as: 'signed-out',
+    status: 200,
+    answer: invitationInfo,
+    probe: (a) => a.get(`/api/invitations/${company.invitation.token}`),
+  },
+  'POST /api/invitations/:token/accept': {
+    as: 'signed-out',
+    status: 201,
+    answer: invitationAccepted,
+    probe: async (a) =>
+      a
+        .post(`/api/invitations/${(await freshInvitation()).token}/accept`)
+        .set(JSON_HEADERS)
+        .send({ name: 'New Person', password: 'a long enough passphrase' }),
+  },
+
+  // The signed-in person and their company.
+  'GET /api/account/me': { as: 'owner', status: 200, answer: me, probe: (a) => a.get('/api/account/me') },
+  'POST /api/account/me/company': {
+    as: 'owner',
+    status: 204,
+    answer: 'no-content',
+    probe: (a) => a.post('/api/account/me/company').set(JSON_HEADERS).send({ tenantId: company.tenantId }),
+  },
+  'GET /api/company': { as: 'owner', status: 200, answer: companyResponse, probe: (a) => a.get('/api/company') },
+  'PATCH /api/company': {
+    as: 'owner',
+    status: 200,
+    answer: companyResponse,
+    probe: (a) => a.patch('/api/company').set(JSON_HEADERS).send({ locale: 'en-US' }),
+  },
+  'GET /api/activity': { as: 'owner', status: 200, answer: activityPage, probe: (a) => a.get('/api/activity') },
+  'GET /api/settings': { as: 'owner', status: 200, answer: companySettings, probe: (a) => a.get('/api/settings') },
+  'PATCH /api/settings': {
+    as: 'owner',
+    status: 200,
+    answer: companySettings,
+    probe: (a) => a.patch('/api/settings').set(JSON_HEADERS).send({ warnBeforeMinutes: 30 }),
+  },
+
+  // The team.
+  'GET /api/team': { as: 'owner', status: 200, answer: team, probe: (a) => a.get('/api/team') },
+  'POST /api/team/invitations': {
+    as: 'owner',
+    status: 201,
+    answer: invitationSent,
+    probe: (a) =>
+      a
+        .post('/api/team/invitations')
+        .set(JSON_HEADERS)
+        .send({ email: `${unique('invite')}@example.test`, role: 'technician' }),
+  },
+  'DELETE /api/team/invitations/:id': {
+    as: 'owner',
+    status: 204,
+    answer: 'no-content',
+    probe: async (a) => a.delete(`/api/team/invitations/${(await freshInvitation()).id}`).set(JSON_HEADERS),
+  },
+  'PATCH /api/team/members/:id': {
+    as: 'owner',
+    status: 200,
+    answer: memberRoleChanged,
+    probe: async (a) => {
+      const member = await addMember(t.db.owner, company.tenantId, 'technician');
+      return a.patch(`/api/team/members/${member.id}`).set(JSON_HEADERS).send({ role: 'dispatcher' });
+    },
+  },
+  'DELETE /api/team/members/:id': {
+    as: 'owner',
+    status: 204,
+    answer: 'no-content',
+    probe: async (a) => {
+      const member = await addMember(t.db.owner, company.tenantId, 'technician');
+      return a.delete(`/api/team/members/${member.id}`).set(JSON_HEADERS);
+    },
+  },
+
+  // Venues.
+  'GET /api/venues': { as: 'owner', status: 200, answer: venuePage, probe: (a) => a.get('/api/venues') },
+  'GET /api/venues/:id': { as: 'owner', status: 200, answer: venue, probe: (a) => a.get(`/api/venues/${company.venueIds[0]}`) },
+  'POST /api/venues': {
+    as: 'owner',
+    status: 201,
+    answer: venue,
+    probe: (a) =>
+      a
+        .post('/api/venues')
+        .set(JSON_HEADERS)
+        .send({
+          name: unique('New venue'),
+          addressLine: '1 Probe Street',
+          city: 'Testville',
+          latitude: 41.9,
+          longitude: -87.6,
+          openingHours: { '5': [{ open: '16:00', close: '02:00' }] },
+        }),
+  },
+  'PATCH /api/venues/:id': {
+    as: 'owner',
+    status: 200,
+    answer: venue,
+    probe: async (a) =>
+      a
+        .patch(`/api/venues/${await freshVenue()}`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, notes: 'Back door' }),
+  },
+  'POST /api/venues/:id/retire': {
+    as: 'owner',
+    status: 200,
+    answer: venue,
+    probe: async (a) => a.post(`/api/venues/${await freshVenue()}/retire`).set(JSON_HEADERS),
+  },
+  'GET /api/venues/:id/contacts': {
+    as: 'owner',
+    status: 200,
+    answer: venueContactList,
+    probe: (a) => a.get(`/api/venues/${company.venueIds[0]}/contacts`),
+  },
+  'POST /api/venues/:id/contacts': {
+    as: 'owner',
+    status: 201,
+    answer: venueContactsLinked,
+    probe: async (a) =>
+      a
+        .post(`/api/venues/${await freshVenue()}/contacts`)
+        .set(JSON_HEADERS)
+        .send({ userId: company.venueContact.id }),
+  },
+  'DELETE /api/venues/:id/contacts/:userId': {
+    as: 'owner',
+    status: 204,
+    answer: 'no-content',
+    probe: async (a) => {
+      const venueId = await freshVenue();
+      await withScope(t.db.app, asOwner(), (tx) => linkVenueContact(tx, venueId, company.venueContact.id));
+      return a.delete(`/api/venues/${venueId}/contacts/${company.venueContact.id}`).set(JSON_HEADERS);
+    },
+  },
+  'GET /api/venues/:id/tag-sheet': {
+    as: 'owner',
+    status: 200,
+    answer: 'html',
+    probe: (a) => a.get(`/api/venues/${company.venueIds[0]}/tag-sheet`),
+  },
+
+  // Games and models.
+  'GET /api/games': { as: 'owner', status: 200, answer: gamePage, probe: (a) => a.get('/api/games') },
+  'GET /api/games/summary': { as: 'owner', status: 200, answer: gameSummary, probe: (a) => a.get('/api/games/summary') },
+  'GET /api/games/:id': { as: 'owner', status: 200, answer: gameDetail, probe: (a) => a.get(`/api/games/${company.gameIds[0]}`) },
+  'GET /api/games/:id/downtime': {
+    as: 'owner',
+    status: 200,
+    answer: downtimeList,
+    probe: (a) => a.get(`/api/games/${company.gameIds[0]}/downtime`),
+  },
+  'POST /api/games': {
+    as: 'owner',
+    status: 201,
+    answer: game,
+    probe: (a) =>
+      a
+        .post('/api/games')
+        .set(JSON_HEADERS)
+        .send({ modelId: company.modelId, venueId: company.venueIds[1], serial: unique('SN'), installedOn: '2024-03-01' }),
+  },
+  'PATCH /api/games/:id': {
+    as: 'owner',
+    status: 200,
+    answer: game,
+    probe: async (a) =>
+      a
+        .patch(`/api/games/${await addGame(t.db, company)}`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, notes: 'Coin door sticks' }),
+  },
+  'POST /api/games/:id/retire': {
+    as: 'owner',
+    status: 200,
+    answer: game,
+    probe: async (a) => a.post(`/api/games/${await addGame(t.db, company)}/retire`).set(JSON_HEADERS),
+  },
+  'POST /api/games/:id/regenerate-tag': {
+    as: 'owner',
+    status: 200,
+    answer: tagRegenerated,
+    probe: async (a) => a.post(`/api/games/${await addGame(t.db, company)}/regenerate-tag`).set(JSON_HEADERS),
+  },
+  'GET /api/models': { as: 'owner', status: 200, answer: gameModelList, probe: (a) => a.get('/api/models') },
+  'POST /api/models': {
+    as: 'owner',
+    status: 201,
+    answer: gameModel,
+    probe: (a) =>
+      a
+        .post('/api/models')
+        .set(JSON_HEADERS)
+        .send({ maker: 'Probeworks', title: unique('Model'), kind: 'darts' }),
+  },
+
+  // Service calls.
+  'GET /api/calls': { as: 'owner', status: 200, answer: callPage, probe: (a) => a.get('/api/calls') },
+  'POST /api/calls': {
+    as: 'owner',
+    status: 201,
+    answer: openedCall,
+    probe: async (a) =>
+      a
+        .post('/api/calls')
+        .set(JSON_HEADERS)
+        .send({ gameId: await addGame(t.db, company), problem: 'dead', note: 'No lights at all' }),
+  },
+  // The game-tag report: a timeline, messages in the outbox, a photo.
+  'GET /api/calls/:id': { as: 'owner', status: 200, answer: callDetail, probe: (a) => a.get(`/api/calls/${reported.callId}`) },
+  'GET /api/calls/:id/technicians': {
+    as: 'owner',
+    status: 200,
+    answer: rankedTechnicianList,
+    probe: (a) => a.get(`/api/calls/${company.downCallId}/technicians`),
+  },
+  'POST /api/calls/:id/assign': {
+    as: 'owner',
+    status: 200,
+    answer: serviceCall,
+    probe: async (a) =>
+      a
+        .post(`/api/calls/${await freshCall()}/assign`)
+        .set(JSON_HEADERS)
+        .send({ technicianId: company.technician.id, version: 1 }),
+  },
+  'POST /api/calls/:id/transition': {
+    as: 'owner',
+    status: 200,
+    answer: serviceCall,
+    probe: async (a) => {
+      const call = await freshAssignedCall();
+      return a.post(`/api/calls/${call.id}/transition`).set(JSON_HEADERS).send({ to: 'on_the_way', version: call.version });
+    },
+  },
+  // Only the assigned technician has an assignment to answer.
+  'POST /api/calls/:id/answer': {
+    as: 'technician',
+    status: 200,
+    answer: serviceCall,
+    probe: async (a) =>
+      a
+        .post(`/api/calls/${(await freshAssignedCall()).id}/answer`)
+        .set(JSON_HEADERS)
+        .send({ accept: true }),
+  },
+  'POST /api/calls/:id/severity': {
+    as: 'owner',
+    status: 200,
+    answer: serviceCall,
+    probe: async (a) =>
+      a
+        .post(`/api/calls/${await freshCall()}/severity`)
+        .set(JSON_HEADERS)
+        .send({ severity: 'cosmetic', version: 1 }),
+  },
+  'POST /api/calls/:id/notes': {
+    as: 'owner',
+    status: 201,
+    answer: noteAdded,
+    probe: (a) => a.post(`/api/calls/${company.downCallId}/notes`).set(JSON_HEADERS).send({ note: 'Checked the fuses' }),
+  },
+  'GET /api/calls/:id/photos/:photoId': {
+    as: 'owner',
+    status: 200,
+    answer: 'image',
+    probe: (a) => a.get(`/api/calls/${reported.callId}/photos/${reported.photoId}`),
+  },
+  'GET /api/technicians': { as: 'owner', status: 200, answer: technicianList, probe: (a) => a.get('/api/technicians') },
+
+  // The venue contact's view.
+  'GET /api/venue-view': { as: 'venue_contact', status: 200, answer: venueView, probe: (a) => a.get('/api/venue-view') },
+  'POST /api/venue-view/calls': {
+    as: 'venue_contact',
+    status: 201,
+    answer: venueReportOpened,
+    // A new game at the venue the contact speaks for (venueIds[0]).
+    probe: async (a) =>
+      a
+        .post('/api/venue-view/calls')
+        .set(JSON_HEADERS)
+        .send({ gameId: await addGame(t.db, company, 0), problem: 'no_credit' }),
+  },
+};
+
+/** What is wrong with the answer, or 'as agreed'. */
+function check(res: Response, e: Endpoint): string {
+  if (res.status !== e.status) return `status ${res.status}, not ${e.status}: ${res.text}`;
+  const type = String(res.headers['content-type'] ?? '');
+  if (e.answer === 'no-content') return res.text ? `a body where none was agreed: ${res.text}` : 'as agreed';
+  if (e.answer === 'html') return type.startsWith('text/html') ? 'as agreed' : `content type ${type}, not HTML`;
+  if (e.answer === 'image') return type.startsWith('image/') ? 'as agreed' : `content type ${type}, not an image`;
+  if (!type.startsWith('application/json')) return `content type ${type}, not JSON`;
+  return conformance(e.answer, res.body);
+}
+
+function conformance(schema: z.ZodType, body: unknown): string {
+  const parsed = schema.safeParse(body);
+  return parsed.success ? 'as agreed' : z.prettifyError(parsed.error);
+}
+
+beforeAll(async () => {
+  t = await buildTestApp();
+  photoDir = await mkdtemp(path.join(os.tmpdir(), 'bumperline-contracts-photos-'));
+  company = await createFullCompany(t.db, 'Delta Arcade', folderPhotoStore(photoDir));
+  agents.owner = await signedInAgent(t, company.ownerEmail);
+  agents.technician = await signedInAgent(t, company.technician.email);
+  agents.venue_contact = await signedInAgent(t, company.venueContact.email);
+  agents['signed-out'] = request.agent(t.app);
+
+  // A report with a note, a phone and a photo through the game-tag page, on a game of its own: the
+  // call then has a timeline, messages in the outbox and a photo the app's own store can serve.
+  const gameId = await addGame(t.db, company);
+  const [row] = await t.db.owner
+    .select({ tagToken: games.tagToken })
+    .from(games)
+    .where(and(eq(games.tenantId, company.tenantId), eq(games.id, gameId)));
+  const photo = await sharp({ create: { width: 40, height: 30, channels: 3, background: '#79a' } })
+    .jpeg()
+    .toBuffer();
+  await request(t.app)
+    .post(`/t/${row!.tagToken}`)
+    .field('problem', 'dead')
+    .field('note', 'Smells of smoke')
+    .field('phone', '(312) 555-0142')
+    .field('smsConsent', 'on')
+    .attach('photo', photo, { filename: 'cabinet.jpg', contentType: 'image/jpeg' })
+    .expect(303);
+  const [call] = await t.db.owner
+    .select({ callId: serviceCalls.id, photoId: callPhotos.id })
+    .from(serviceCalls)
+    .innerJoin(callPhotos, and(eq(callPhotos.tenantId, serviceCalls.tenantId), eq(callPhotos.callId, serviceCalls.id)))
+    .where(and(eq(serviceCalls.tenantId, company.tenantId), eq(serviceCalls.gameId, gameId)));
+  reported = call!;
+});
+afterAll(async () => {
+  await t?.close();
+  await rm(photoDir, { recursive: true, force: true });
+});
+
+describe('the contract table', () => {
+  it('names every /api route of the app, and only routes of the app', () => {
+    const apiRoutes = listRoutes(t.app)
+      .map((r) => r.key)
+      .filter((key) => key.split(' ')[1]!.startsWith('/api/'));
+    expect(apiRoutes.filter((key) => !(key in endpoints))).toEqual([]);
+    expect(Object.keys(endpoints).filter((key) => !apiRoutes.includes(key))).toEqual([]);
+  });
+});
+
+describe('refused requests answer problem details', () => {
+  it('bad input, naming the bad fields', async () => {
+    const res = await agents.owner.post('/api/venues').set(JSON_HEADERS).send({ latitude: 'north' });
+    expect(res.status).toBe(400);
+    expect(conformance(problemDetails, res.body)).toBe('as agreed');
+  });
+
+  it('a conflict carries the row as it now is', async () => {
+    const res = await agents.owner
+      .patch(`/api/venues/${await freshVenue()}`)
+      .set(JSON_HEADERS)
+      .send({ version: 7, notes: 'Too late' });
+    expect(res.status).toBe(409);
+    expect(conformance(problemDetails.extend({ current: venue }), res.body)).toBe('as agreed');
+  });
+});
+
+describe('every /api endpoint answers what its contract says', () => {
+  for (const [key, e] of Object.entries(endpoints)) {
+    it(key, async () => {
+      expect(check(await e.probe(agents[e.as]), e)).toBe('as agreed');
+    });
+  }
+});

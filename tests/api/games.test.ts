@@ -1,0 +1,55 @@
+// Games through the API: create, filter, update and retire, with references to the company's own models
+// and venues only.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { sql } from 'drizzle-orm';
+import { buildTestApp, JSON_HEADERS, signedInAgent, type Agent, type TestApp } from '../support/app.ts';
+import { createCompany, type CompanyFixture } from '../support/factories.ts';
+
+let t: TestApp;
+let a: CompanyFixture;
+let b: CompanyFixture;
+let owner: Agent;
+
+beforeAll(async () => {
+  t = await buildTestApp();
+  a = await createCompany(t.db.owner, 'Alpha Amusements', 3);
+  b = await createCompany(t.db.owner, 'Beta Games', 2);
+  owner = await signedInAgent(t, a.ownerEmail);
+});
+afterAll(() => t.close());
+
+async function auditCount(entityId: string): Promise<number> {
+  const r = await t.db.owner.execute(sql`select count(*)::int as n from audit_log where entity_id = ${entityId}`);
+  return (r.rows[0] as { n: number }).n;
+}
+
+describe('games', () => {
+  it('create, filter, update, retire; references must be of the same company', async () => {
+    const created = await owner
+      .post('/api/games')
+      .set(JSON_HEADERS)
+      .send({ modelId: a.modelId, venueId: a.venueIds[0], serial: 'NEW-1', installedOn: '2024-05-01' })
+      .expect(201);
+    expect(created.body).toMatchObject({ serial: 'NEW-1', status: 'running', model: { title: 'Alpha Amusements Flipper' } });
+    expect(created.body).not.toHaveProperty('tagToken');
+    const filtered = await owner.get('/api/games').query({ venueId: a.venueIds[0], q: 'NEW' }).expect(200);
+    expect(filtered.body.items.map((g: { serial: string }) => g.serial)).toEqual(['NEW-1']);
+    const down = await owner.patch(`/api/games/${created.body.id}`).set(JSON_HEADERS).send({ version: 1, status: 'down' }).expect(200);
+    expect(down.body.status).toBe('down');
+    const onlyDown = await owner.get('/api/games').query({ status: 'down' }).expect(200);
+    expect(onlyDown.body.items.every((g: { status: string }) => g.status === 'down')).toBe(true);
+    const foreign = await owner
+      .post('/api/games')
+      .set(JSON_HEADERS)
+      .send({ modelId: b.modelId, venueId: b.venueIds[0], serial: 'X' })
+      .expect(400);
+    expect(foreign.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['modelId', 'venueId']);
+    await owner.post(`/api/games/${created.body.id}/retire`).set(JSON_HEADERS).expect(200);
+    expect(await auditCount(created.body.id)).toBe(3);
+  });
+
+  it("another company's game is 404", async () => {
+    await owner.get(`/api/games/${b.gameIds[0]}`).expect(404);
+    await owner.patch(`/api/games/${b.gameIds[0]}`).set(JSON_HEADERS).send({ version: 1, status: 'down' }).expect(404);
+  });
+});
