@@ -1,24 +1,17 @@
 // Accounts: sign-up and sign-in, signing out, password reset and the links mailed for it, sign-in by link.
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { roles, type Role } from '@bumperline/contracts/roles';
-import { memberships } from '@bumperline/db/schema/index';
+import type { Role } from '@bumperline/contracts/roles';
 import { buildTestApp, JSON_HEADERS, signIn, signInWithLink, signedInAgent, type TestApp } from '../support/app.ts';
-import { createCompany, createUser, TEST_PASSWORD, type CompanyFixture } from '../support/factories.ts';
+import { companyWithEveryRole, createUser, TEST_PASSWORD, type CompanyFixture } from '../support/factories.ts';
 
 let t: TestApp;
 let company: CompanyFixture;
-const people = {} as Record<Role, string>;
+let people: Record<Role, string>;
 
 beforeAll(async () => {
   t = await buildTestApp({ signInLimit: 5 });
-  company = await createCompany(t.db.owner, 'Gamma Coin', 2);
-  people.owner = company.ownerEmail;
-  for (const role of roles.filter((r) => r !== 'owner')) {
-    const u = await createUser(t.db.owner, { email: `${role}@gamma.test` });
-    await t.db.owner.insert(memberships).values({ tenantId: company.tenantId, userId: u.id, role });
-    people[role] = u.email;
-  }
+  ({ company, people } = await companyWithEveryRole(t.db.owner, 'Gamma Coin'));
 });
 afterAll(() => t.close());
 
@@ -31,7 +24,11 @@ describe('sign-up and sign-in', () => {
       .expect(202);
     expect(res.body).toEqual({ status: 'check-your-email' });
     const token = /token=([\w-]+)/.exec(t.mail.lastTo('dee@delta.test')?.text ?? '')?.[1];
-    await request(t.app).post('/api/account/verify-email').set(JSON_HEADERS).send({ token }).expect(204);
+    await request(t.app)
+      .post('/api/account/verify-email')
+      .set(JSON_HEADERS)
+      .send({ token, password: 'a long enough passphrase' })
+      .expect(204);
     const agent = request.agent(t.app);
     expect(await signIn(agent, 'dee@delta.test', 'a long enough passphrase')).toBe(200);
     const me = await agent.get('/api/account/me').expect(200);

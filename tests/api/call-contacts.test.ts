@@ -2,28 +2,21 @@
 // A technician reading the same call sees that a text went out, never the number.
 import { sql } from 'drizzle-orm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { can, roles, type Role } from '@bumperline/contracts/roles';
+import { can, type Role } from '@bumperline/contracts/roles';
 import { withScope } from '@bumperline/db/client';
 import { openCall } from '@bumperline/api/services/service-calls';
-import { memberships } from '@bumperline/db/schema/index';
 import { buildTestApp, JSON_HEADERS, ORIGIN, signedInAgent, type TestApp } from '../support/app.ts';
-import { createCompany, createUser, type CompanyFixture } from '../support/factories.ts';
+import { companyWithEveryRole, type CompanyFixture } from '../support/factories.ts';
 
 const REPORTER = '+13125550142';
 let t: TestApp;
 let company: CompanyFixture;
 let callId: string;
-const people = {} as Record<Role, string>;
+let people: Record<Role, string>;
 
 beforeAll(async () => {
   t = await buildTestApp();
-  company = await createCompany(t.db.owner, 'Contact Coin', 1);
-  people.owner = company.ownerEmail;
-  for (const role of roles.filter((r) => r !== 'owner')) {
-    const u = await createUser(t.db.owner, { email: `${role}@contact.test` });
-    await t.db.owner.insert(memberships).values({ tenantId: company.tenantId, userId: u.id, role });
-    people[role] = u.email;
-  }
+  ({ company, people } = await companyWithEveryRole(t.db.owner, 'Contact Coin', 1));
   // A report from the game tag with a phone and consent to texts.
   const opened = await withScope(t.db.app, { tenantId: company.tenantId }, (tx) =>
     openCall(tx, {

@@ -2,9 +2,9 @@
 // and downtime following the call, and the messages each step queues.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sql } from 'drizzle-orm';
-import { memberships, technicianProfiles, users, venueContacts } from '@bumperline/db/schema/index';
+import { technicianProfiles, users, venueContacts } from '@bumperline/db/schema/index';
 import { buildTestApp, JSON_HEADERS, signedInAgent, type Agent, type TestApp } from '../support/app.ts';
-import { createCompany, createUser, type CompanyFixture } from '../support/factories.ts';
+import { createCompany, createMember, type CompanyFixture } from '../support/factories.ts';
 
 let t: TestApp;
 let a: CompanyFixture;
@@ -16,12 +16,6 @@ let techNear: { id: string; agent: Agent };
 let techFar: { id: string; agent: Agent };
 let venueContact: Agent;
 
-async function member(company: CompanyFixture, role: 'dispatcher' | 'technician' | 'venue_contact', over: Record<string, unknown> = {}) {
-  const u = await createUser(t.db.owner, over);
-  await t.db.owner.insert(memberships).values({ tenantId: company.tenantId, userId: u.id, role });
-  return u;
-}
-
 async function owned<T>(query: ReturnType<typeof sql>): Promise<T[]> {
   return (await t.db.owner.execute(query)).rows as T[];
 }
@@ -31,18 +25,18 @@ beforeAll(async () => {
   a = await createCompany(t.db.owner, 'Alpha Amusements', 3);
   b = await createCompany(t.db.owner, 'Beta Games', 1);
   owner = await signedInAgent(t, a.ownerEmail);
-  dispatcher = await signedInAgent(t, (await member(a, 'dispatcher')).email);
-  dispatcher2 = await signedInAgent(t, (await member(a, 'dispatcher')).email);
+  dispatcher = await signedInAgent(t, (await createMember(t.db.owner, a.tenantId, 'dispatcher')).email);
+  dispatcher2 = await signedInAgent(t, (await createMember(t.db.owner, a.tenantId, 'dispatcher')).email);
   // Venue 1 of the fixture is at 41.88,-87.63. The near technician lives a few hundred metres away.
-  const near = await member(a, 'technician', { phone: '+13125550161', name: 'Near Tech' });
-  const far = await member(a, 'technician', { phone: '+13125550162', name: 'Far Tech' });
+  const near = await createMember(t.db.owner, a.tenantId, 'technician', { phone: '+13125550161', name: 'Near Tech' });
+  const far = await createMember(t.db.owner, a.tenantId, 'technician', { phone: '+13125550162', name: 'Far Tech' });
   await t.db.owner.insert(technicianProfiles).values([
     { tenantId: a.tenantId, userId: near.id, skills: ['pinball'], homeLatitude: 41.881, homeLongitude: -87.631 },
     { tenantId: a.tenantId, userId: far.id, skills: ['pinball'], homeLatitude: 42.05, homeLongitude: -87.68 },
   ]);
   techNear = { id: near.id, agent: await signedInAgent(t, near.email) };
   techFar = { id: far.id, agent: await signedInAgent(t, far.email) };
-  const vc = await member(a, 'venue_contact', { email: 'contact@alpha-venue.test' });
+  const vc = await createMember(t.db.owner, a.tenantId, 'venue_contact', { email: 'contact@alpha-venue.test' });
   await t.db.owner.insert(venueContacts).values({ tenantId: a.tenantId, venueId: a.venueIds[0]!, userId: vc.id });
   venueContact = await signedInAgent(t, vc.email);
 });

@@ -3,15 +3,9 @@
 // strict objects, so a field the contract does not name (a new column, a leaked secret) fails here as
 // surely as a missing or mistyped one. Endpoints that answer no JSON say so in the table.
 // A new /api route fails this file until it is added to the table below.
-import { randomBytes } from 'node:crypto';
-import { mkdtemp, rm } from 'node:fs/promises';
-import os from 'node:os';
-import path from 'node:path';
-import request, { type Response } from 'supertest';
-import sharp from 'sharp';
+import type { Response } from 'supertest';
 import { z } from 'zod';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { and, eq } from 'drizzle-orm';
 import { activityPage } from '@bumperline/contracts/activity';
 import { mailSentIfKnown, me, signUpAnswered } from '@bumperline/contracts/auth';
 import {
@@ -40,17 +34,21 @@ import { companySettings } from '@bumperline/contracts/settings';
 import { invitationAccepted, invitationInfo, invitationSent, memberRoleChanged, team } from '@bumperline/contracts/team';
 import { venueReportOpened, venueView } from '@bumperline/contracts/venue-view';
 import { venue, venueContactList, venueContactsLinked, venuePage } from '@bumperline/contracts/venues';
-import { withScope } from '@bumperline/db/client';
 import { issueEmailToken } from '@bumperline/db/queries/email-tokens';
-import { insertInvitation } from '@bumperline/db/queries/team';
-import { linkVenueContact } from '@bumperline/db/queries/venue-contacts';
-import { callPhotos, games, serviceCalls, venues } from '@bumperline/db/schema/index';
-import { newToken } from '@bumperline/api/auth/tokens';
-import { folderPhotoStore } from '@bumperline/api/services/photo-store';
-import { buildTestApp, JSON_HEADERS, signedInAgent, type Agent, type TestApp } from '../support/app.ts';
-import { addGame, addMember, assignServiceCall, openServiceCall } from '../support/call-factories.ts';
-import { createUser } from '../support/factories.ts';
-import { createFullCompany, type FullCompany } from '../support/full-company.ts';
+import { JSON_HEADERS, type Agent, type TestApp } from '../support/app.ts';
+import { addGame, addMember } from '../support/call-factories.ts';
+import { createUser, TEST_PASSWORD } from '../support/factories.ts';
+import {
+  freshAssignedCall,
+  freshCall,
+  freshContactVenue,
+  freshInvitation,
+  freshVenue,
+  reportThroughTag,
+  unique,
+  type TagReport,
+} from '../support/fresh-rows.ts';
+import { appWithFullCompany, type FullCompany } from '../support/full-company.ts';
 import { listRoutes } from '../support/route-list.ts';
 
 type Caller = 'owner' | 'technician' | 'venue_contact' | 'signed-out';
@@ -66,59 +64,18 @@ interface Endpoint {
 }
 
 let t: TestApp;
-let photoDir: string;
 let company: FullCompany;
-const agents = {} as Record<Caller, Agent>;
+let agents: Record<Caller, Agent>;
+let close: () => Promise<void>;
 /** A report with a photo sent through the game-tag page, so that the app's own photo store holds the file. */
-let reported: { callId: string; photoId: string };
+let reported: TagReport;
 
-let serial = 0;
-const unique = (prefix: string) => `${prefix}-${++serial}-${randomBytes(3).toString('hex')}`;
-const asOwner = () => ({ tenantId: company.tenantId, userId: company.ownerId });
 const DAY_MS = 24 * 3600_000;
-
-async function freshVenue(): Promise<string> {
-  const [v] = await t.db.owner
-    .insert(venues)
-    .values({
-      tenantId: company.tenantId,
-      name: unique('Venue'),
-      addressLine: '9 Probe Street',
-      city: 'Testville',
-      latitude: 41.9,
-      longitude: -87.6,
-    })
-    .returning({ id: venues.id });
-  return v!.id;
-}
-
-async function freshInvitation(): Promise<{ id: string; token: string }> {
-  const { token, hash } = newToken();
-  const id = await withScope(t.db.app, asOwner(), (tx) =>
-    insertInvitation(tx, {
-      email: `${unique('invited')}@example.test`,
-      role: 'technician',
-      tokenHash: hash,
-      invitedBy: company.ownerId,
-      expiresAt: new Date(Date.now() + DAY_MS),
-    }),
-  );
-  return { id, token };
-}
 
 /** The token of a link we would have mailed to a new person (whose address nobody has confirmed yet). */
 async function freshEmailToken(purpose: 'verify-email' | 'password-reset'): Promise<string> {
   const user = await createUser(t.db.owner, { emailVerifiedAt: null });
   return issueEmailToken(t.db.app, user.id, purpose, DAY_MS);
-}
-
-const freshCall = () => openServiceCall(t.db, company, { problem: 'no_sound' });
-
-/** A new call assigned to the company's technician, and its version after the assignment. */
-async function freshAssignedCall(): Promise<{ id: string; version: number }> {
-  const id = await freshCall();
-  const view = await assignServiceCall(t.db, company, id, company.technician.id);
-  return { id, version: view.version };
 }
 
 const endpoints: Record<string, Endpoint> = {
@@ -147,7 +104,7 @@ const endpoints: Record<string, Endpoint> = {
       a
         .post('/api/account/verify-email')
         .set(JSON_HEADERS)
-        .send({ token: await freshEmailToken('verify-email') }),
+        .send({ token: await freshEmailToken('verify-email'), password: TEST_PASSWORD }),
   },
   'POST /api/account/verify-email/resend': {
     as: 'signed-out',
@@ -189,7 +146,7 @@ const endpoints: Record<string, Endpoint> = {
     answer: invitationAccepted,
     probe: async (a) =>
       a
-        .post(`/api/invitations/${(await freshInvitation()).token}/accept`)
+        .post(`/api/invitations/${(await freshInvitation(t.db, company)).token}/accept`)
         .set(JSON_HEADERS)
         .send({ name: 'New Person', password: 'a long enough passphrase' }),
   },
@@ -234,7 +191,7 @@ const endpoints: Record<string, Endpoint> = {
     as: 'owner',
     status: 204,
     answer: 'no-content',
-    probe: async (a) => a.delete(`/api/team/invitations/${(await freshInvitation()).id}`).set(JSON_HEADERS),
+    probe: async (a) => a.delete(`/api/team/invitations/${(await freshInvitation(t.db, company)).id}`).set(JSON_HEADERS),
   },
   'PATCH /api/team/members/:id': {
     as: 'owner',
@@ -281,7 +238,7 @@ const endpoints: Record<string, Endpoint> = {
     answer: venue,
     probe: async (a) =>
       a
-        .patch(`/api/venues/${await freshVenue()}`)
+        .patch(`/api/venues/${await freshVenue(t.db, company)}`)
         .set(JSON_HEADERS)
         .send({ version: 1, notes: 'Back door' }),
   },
@@ -289,7 +246,7 @@ const endpoints: Record<string, Endpoint> = {
     as: 'owner',
     status: 200,
     answer: venue,
-    probe: async (a) => a.post(`/api/venues/${await freshVenue()}/retire`).set(JSON_HEADERS),
+    probe: async (a) => a.post(`/api/venues/${await freshVenue(t.db, company)}/retire`).set(JSON_HEADERS),
   },
   'GET /api/venues/:id/contacts': {
     as: 'owner',
@@ -303,7 +260,7 @@ const endpoints: Record<string, Endpoint> = {
     answer: venueContactsLinked,
     probe: async (a) =>
       a
-        .post(`/api/venues/${await freshVenue()}/contacts`)
+        .post(`/api/venues/${await freshVenue(t.db, company)}/contacts`)
         .set(JSON_HEADERS)
         .send({ userId: company.venueContact.id }),
   },
@@ -312,8 +269,7 @@ const endpoints: Record<string, Endpoint> = {
     status: 204,
     answer: 'no-content',
     probe: async (a) => {
-      const venueId = await freshVenue();
-      await withScope(t.db.app, asOwner(), (tx) => linkVenueContact(tx, venueId, company.venueContact.id));
+      const venueId = await freshContactVenue(t.db, company);
       return a.delete(`/api/venues/${venueId}/contacts/${company.venueContact.id}`).set(JSON_HEADERS);
     },
   },
@@ -404,7 +360,7 @@ const endpoints: Record<string, Endpoint> = {
     answer: serviceCall,
     probe: async (a) =>
       a
-        .post(`/api/calls/${await freshCall()}/assign`)
+        .post(`/api/calls/${await freshCall(t.db, company)}/assign`)
         .set(JSON_HEADERS)
         .send({ technicianId: company.technician.id, version: 1 }),
   },
@@ -413,7 +369,7 @@ const endpoints: Record<string, Endpoint> = {
     status: 200,
     answer: serviceCall,
     probe: async (a) => {
-      const call = await freshAssignedCall();
+      const call = await freshAssignedCall(t.db, company);
       return a.post(`/api/calls/${call.id}/transition`).set(JSON_HEADERS).send({ to: 'on_the_way', version: call.version });
     },
   },
@@ -424,7 +380,7 @@ const endpoints: Record<string, Endpoint> = {
     answer: serviceCall,
     probe: async (a) =>
       a
-        .post(`/api/calls/${(await freshAssignedCall()).id}/answer`)
+        .post(`/api/calls/${(await freshAssignedCall(t.db, company)).id}/answer`)
         .set(JSON_HEADERS)
         .send({ accept: true }),
   },
@@ -434,7 +390,7 @@ const endpoints: Record<string, Endpoint> = {
     answer: serviceCall,
     probe: async (a) =>
       a
-        .post(`/api/calls/${await freshCall()}/severity`)
+        .post(`/api/calls/${await freshCall(t.db, company)}/severity`)
         .set(JSON_HEADERS)
         .send({ severity: 'cosmetic', version: 1 }),
   },
@@ -484,43 +440,12 @@ function conformance(schema: z.ZodType, body: unknown): string {
 }
 
 beforeAll(async () => {
-  t = await buildTestApp();
-  photoDir = await mkdtemp(path.join(os.tmpdir(), 'bumperline-contracts-photos-'));
-  company = await createFullCompany(t.db, 'Delta Arcade', folderPhotoStore(photoDir));
-  agents.owner = await signedInAgent(t, company.ownerEmail);
-  agents.technician = await signedInAgent(t, company.technician.email);
-  agents.venue_contact = await signedInAgent(t, company.venueContact.email);
-  agents['signed-out'] = request.agent(t.app);
-
+  ({ t, company, agents, close } = await appWithFullCompany('Delta Arcade'));
   // A report with a note, a phone and a photo through the game-tag page, on a game of its own: the
   // call then has a timeline, messages in the outbox and a photo the app's own store can serve.
-  const gameId = await addGame(t.db, company);
-  const [row] = await t.db.owner
-    .select({ tagToken: games.tagToken })
-    .from(games)
-    .where(and(eq(games.tenantId, company.tenantId), eq(games.id, gameId)));
-  const photo = await sharp({ create: { width: 40, height: 30, channels: 3, background: '#79a' } })
-    .jpeg()
-    .toBuffer();
-  await request(t.app)
-    .post(`/t/${row!.tagToken}`)
-    .field('problem', 'dead')
-    .field('note', 'Smells of smoke')
-    .field('phone', '(312) 555-0142')
-    .field('smsConsent', 'on')
-    .attach('photo', photo, { filename: 'cabinet.jpg', contentType: 'image/jpeg' })
-    .expect(303);
-  const [call] = await t.db.owner
-    .select({ callId: serviceCalls.id, photoId: callPhotos.id })
-    .from(serviceCalls)
-    .innerJoin(callPhotos, and(eq(callPhotos.tenantId, serviceCalls.tenantId), eq(callPhotos.callId, serviceCalls.id)))
-    .where(and(eq(serviceCalls.tenantId, company.tenantId), eq(serviceCalls.gameId, gameId)));
-  reported = call!;
+  reported = await reportThroughTag(t, company, { note: 'Smells of smoke', phone: '(312) 555-0142', smsConsent: 'on' });
 });
-afterAll(async () => {
-  await t?.close();
-  await rm(photoDir, { recursive: true, force: true });
-});
+afterAll(() => close?.());
 
 describe('the contract table', () => {
   it('names every /api route of the app, and only routes of the app', () => {
@@ -541,7 +466,7 @@ describe('refused requests answer problem details', () => {
 
   it('a conflict carries the row as it now is', async () => {
     const res = await agents.owner
-      .patch(`/api/venues/${await freshVenue()}`)
+      .patch(`/api/venues/${await freshVenue(t.db, company)}`)
       .set(JSON_HEADERS)
       .send({ version: 7, notes: 'Too late' });
     expect(res.status).toBe(409);

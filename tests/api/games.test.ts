@@ -1,9 +1,9 @@
 // Games through the API: create, filter, update and retire, with references to the company's own models
 // and venues only.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { sql } from 'drizzle-orm';
-import { buildTestApp, JSON_HEADERS, signedInAgent, type Agent, type TestApp } from '../support/app.ts';
-import { createCompany, type CompanyFixture } from '../support/factories.ts';
+import { buildTestApp, JSON_HEADERS, type Agent, type TestApp } from '../support/app.ts';
+import type { CompanyFixture } from '../support/factories.ts';
+import { auditCount, twoCompanies } from '../support/two-companies.ts';
 
 let t: TestApp;
 let a: CompanyFixture;
@@ -12,16 +12,9 @@ let owner: Agent;
 
 beforeAll(async () => {
   t = await buildTestApp();
-  a = await createCompany(t.db.owner, 'Alpha Amusements', 3);
-  b = await createCompany(t.db.owner, 'Beta Games', 2);
-  owner = await signedInAgent(t, a.ownerEmail);
+  ({ a, b, owner } = await twoCompanies(t));
 });
 afterAll(() => t.close());
-
-async function auditCount(entityId: string): Promise<number> {
-  const r = await t.db.owner.execute(sql`select count(*)::int as n from audit_log where entity_id = ${entityId}`);
-  return (r.rows[0] as { n: number }).n;
-}
 
 describe('games', () => {
   it('create, filter, update, retire; references must be of the same company', async () => {
@@ -45,7 +38,7 @@ describe('games', () => {
       .expect(400);
     expect(foreign.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['modelId', 'venueId']);
     await owner.post(`/api/games/${created.body.id}/retire`).set(JSON_HEADERS).expect(200);
-    expect(await auditCount(created.body.id)).toBe(3);
+    expect(await auditCount(t.db.owner, created.body.id)).toBe(3);
   });
 
   it("another company's game is 404", async () => {

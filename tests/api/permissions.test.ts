@@ -3,25 +3,23 @@
 // called as every role and signed out, with real ids, and must answer exactly as the table says: 403
 // for a role without the permission, 401 signed out, and the handler's own answer for the others.
 // A new route fails this file until it is added to the table below.
-import { randomBytes } from 'node:crypto';
-import { mkdtemp, rm } from 'node:fs/promises';
-import os from 'node:os';
-import path from 'node:path';
-import request, { type Response } from 'supertest';
-import sharp from 'sharp';
+import type { Response } from 'supertest';
 import twilio from 'twilio';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { and, eq } from 'drizzle-orm';
 import { permissions, roles, type Permission, type Role } from '@bumperline/contracts/roles';
-import { withScope } from '@bumperline/db/client';
-import { insertInvitation } from '@bumperline/db/queries/team';
-import { linkVenueContact } from '@bumperline/db/queries/venue-contacts';
-import { callPhotos, games, serviceCalls, venues } from '@bumperline/db/schema/index';
-import { newToken } from '@bumperline/api/auth/tokens';
-import { folderPhotoStore } from '@bumperline/api/services/photo-store';
-import { buildTestApp, JSON_HEADERS, ORIGIN, signedInAgent, SMS_AUTH_TOKEN, type Agent, type TestApp } from '../support/app.ts';
-import { addGame, addMember, assignServiceCall, openServiceCall } from '../support/call-factories.ts';
-import { createFullCompany, type FullCompany } from '../support/full-company.ts';
+import { JSON_HEADERS, ORIGIN, SMS_AUTH_TOKEN, type Agent, type TestApp } from '../support/app.ts';
+import { addGame, addMember } from '../support/call-factories.ts';
+import {
+  freshAssignedCall,
+  freshCall,
+  freshContactVenue,
+  freshInvitation,
+  freshVenue,
+  reportThroughTag,
+  unique,
+  type TagReport,
+} from '../support/fresh-rows.ts';
+import { appWithFullCompany, type FullCompany } from '../support/full-company.ts';
 import { listRoutes, type ListedRoute } from '../support/route-list.ts';
 
 /** Who may do what, as agreed; the app's own table (packages/contracts/src/roles.ts) must equal it. */
@@ -69,53 +67,11 @@ interface RouteCase {
 }
 
 let t: TestApp;
-let photoDir: string;
 let company: FullCompany;
-const agents = {} as Record<Role | 'signed-out', Agent>;
+let agents: Record<Role | 'signed-out', Agent>;
+let close: () => Promise<void>;
 /** A report with a photo sent through the game-tag page, so that the app's own photo store holds the file. */
-let reported: { gameId: string; tagToken: string; statusToken: string; callId: string; photoId: string };
-
-let serial = 0;
-const unique = (prefix: string) => `${prefix}-${++serial}-${randomBytes(3).toString('hex')}`;
-const asOwner = () => ({ tenantId: company.tenantId, userId: company.ownerId });
-
-async function freshVenue(): Promise<string> {
-  const [v] = await t.db.owner
-    .insert(venues)
-    .values({
-      tenantId: company.tenantId,
-      name: unique('Venue'),
-      addressLine: '9 Probe Street',
-      city: 'Testville',
-      latitude: 41.9,
-      longitude: -87.6,
-    })
-    .returning({ id: venues.id });
-  return v!.id;
-}
-
-async function freshInvitation(): Promise<{ id: string; token: string }> {
-  const { token, hash } = newToken();
-  const id = await withScope(t.db.app, asOwner(), (tx) =>
-    insertInvitation(tx, {
-      email: `${unique('invited')}@example.test`,
-      role: 'technician',
-      tokenHash: hash,
-      invitedBy: company.ownerId,
-      expiresAt: new Date(Date.now() + 24 * 3600_000),
-    }),
-  );
-  return { id, token };
-}
-
-const freshCall = () => openServiceCall(t.db, company, { problem: 'no_sound' });
-
-/** A new call assigned to the company's technician, and its version after the assignment. */
-async function freshAssignedCall(): Promise<{ id: string; version: number }> {
-  const id = await freshCall();
-  const view = await assignServiceCall(t.db, company, id, company.technician.id);
-  return { id, version: view.version };
-}
+let reported: TagReport;
 
 /** Posts a form to an SMS webhook, signed with our key for our public URL as the provider does. */
 function webhook(agent: Agent, route: string, params: Record<string, string>) {
@@ -165,7 +121,7 @@ const routes: Record<string, RouteCase> = {
     access: 'public',
     ok: 201,
     probe: async (c) => {
-      const { token } = await freshInvitation();
+      const { token } = await freshInvitation(t.db, company);
       return c.agent
         .post(`/api/invitations/${token}/accept`)
         .set(JSON_HEADERS)
@@ -244,7 +200,7 @@ const routes: Record<string, RouteCase> = {
   'DELETE /api/team/invitations/:id': {
     access: 'team:manage',
     ok: 204,
-    probe: async (c) => c.agent.delete(`/api/team/invitations/${(await freshInvitation()).id}`).set(JSON_HEADERS),
+    probe: async (c) => c.agent.delete(`/api/team/invitations/${(await freshInvitation(t.db, company)).id}`).set(JSON_HEADERS),
   },
   'PATCH /api/team/members/:id': {
     access: 'team:manage',
@@ -280,14 +236,14 @@ const routes: Record<string, RouteCase> = {
     ok: 200,
     probe: async (c) =>
       c.agent
-        .patch(`/api/venues/${await freshVenue()}`)
+        .patch(`/api/venues/${await freshVenue(t.db, company)}`)
         .set(JSON_HEADERS)
         .send({ version: 1, notes: 'Back door' }),
   },
   'POST /api/venues/:id/retire': {
     access: 'venues:write',
     ok: 200,
-    probe: async (c) => c.agent.post(`/api/venues/${await freshVenue()}/retire`).set(JSON_HEADERS),
+    probe: async (c) => c.agent.post(`/api/venues/${await freshVenue(t.db, company)}/retire`).set(JSON_HEADERS),
   },
   'GET /api/venues/:id/contacts': {
     access: 'venues:read',
@@ -299,7 +255,7 @@ const routes: Record<string, RouteCase> = {
     ok: 201,
     probe: async (c) =>
       c.agent
-        .post(`/api/venues/${await freshVenue()}/contacts`)
+        .post(`/api/venues/${await freshVenue(t.db, company)}/contacts`)
         .set(JSON_HEADERS)
         .send({ userId: company.venueContact.id }),
   },
@@ -307,8 +263,7 @@ const routes: Record<string, RouteCase> = {
     access: 'venues:write',
     ok: 204,
     probe: async (c) => {
-      const venueId = await freshVenue();
-      await withScope(t.db.app, asOwner(), (tx) => linkVenueContact(tx, venueId, company.venueContact.id));
+      const venueId = await freshContactVenue(t.db, company);
       return c.agent.delete(`/api/venues/${venueId}/contacts/${company.venueContact.id}`).set(JSON_HEADERS);
     },
   },
@@ -388,7 +343,7 @@ const routes: Record<string, RouteCase> = {
     ok: 200,
     probe: async (c) =>
       c.agent
-        .post(`/api/calls/${await freshCall()}/assign`)
+        .post(`/api/calls/${await freshCall(t.db, company)}/assign`)
         .set(JSON_HEADERS)
         .send({ technicianId: company.technician.id, version: 1 }),
   },
@@ -396,7 +351,7 @@ const routes: Record<string, RouteCase> = {
     access: 'calls:work',
     ok: 200,
     probe: async (c) => {
-      const call = await freshAssignedCall();
+      const call = await freshAssignedCall(t.db, company);
       return c.agent.post(`/api/calls/${call.id}/transition`).set(JSON_HEADERS).send({ to: 'on_the_way', version: call.version });
     },
   },
@@ -407,7 +362,7 @@ const routes: Record<string, RouteCase> = {
     handler: { owner: 404, dispatcher: 404 },
     probe: async (c) =>
       c.agent
-        .post(`/api/calls/${(await freshAssignedCall()).id}/answer`)
+        .post(`/api/calls/${(await freshAssignedCall(t.db, company)).id}/answer`)
         .set(JSON_HEADERS)
         .send({ accept: true }),
   },
@@ -416,7 +371,7 @@ const routes: Record<string, RouteCase> = {
     ok: 200,
     probe: async (c) =>
       c.agent
-        .post(`/api/calls/${await freshCall()}/severity`)
+        .post(`/api/calls/${await freshCall(t.db, company)}/severity`)
         .set(JSON_HEADERS)
         .send({ severity: 'cosmetic', version: 1 }),
   },
@@ -471,43 +426,12 @@ function expectedAnswers(c: RouteCase, mounted: boolean): Record<string, number 
 let listed: ListedRoute[];
 
 beforeAll(async () => {
-  t = await buildTestApp();
-  photoDir = await mkdtemp(path.join(os.tmpdir(), 'bumperline-permissions-photos-'));
-  company = await createFullCompany(t.db, 'Gamma Coin', folderPhotoStore(photoDir));
-  agents.owner = await signedInAgent(t, company.ownerEmail);
-  agents.dispatcher = await signedInAgent(t, company.dispatcher.email);
-  agents.technician = await signedInAgent(t, company.technician.email);
-  agents.venue_contact = await signedInAgent(t, company.venueContact.email);
-  agents['signed-out'] = request.agent(t.app);
-
+  ({ t, company, agents, close } = await appWithFullCompany('Gamma Coin'));
   // A report with a photo through the game-tag page, on a game of its own.
-  const gameId = await addGame(t.db, company);
-  const [game] = await t.db.owner
-    .select({ tagToken: games.tagToken })
-    .from(games)
-    .where(and(eq(games.tenantId, company.tenantId), eq(games.id, gameId)));
-  const photo = await sharp({ create: { width: 40, height: 30, channels: 3, background: '#a97' } })
-    .jpeg()
-    .toBuffer();
-  const sent = await request(t.app)
-    .post(`/t/${game!.tagToken}`)
-    .field('problem', 'dead')
-    .attach('photo', photo, { filename: 'cabinet.jpg', contentType: 'image/jpeg' })
-    .expect(303);
-  const statusToken = new URL(sent.headers.location as string, ORIGIN).searchParams.get('call')!;
-  const [row] = await t.db.owner
-    .select({ callId: serviceCalls.id, photoId: callPhotos.id })
-    .from(serviceCalls)
-    .innerJoin(callPhotos, and(eq(callPhotos.tenantId, serviceCalls.tenantId), eq(callPhotos.callId, serviceCalls.id)))
-    .where(and(eq(serviceCalls.tenantId, company.tenantId), eq(serviceCalls.gameId, gameId)));
-  reported = { gameId, tagToken: game!.tagToken, statusToken, callId: row!.callId, photoId: row!.photoId };
-
+  reported = await reportThroughTag(t, company);
   listed = listRoutes(t.app);
 });
-afterAll(async () => {
-  await t.close();
-  await rm(photoDir, { recursive: true, force: true });
-});
+afterAll(() => close());
 
 describe('the route table', () => {
   it('the permission table of the app is the one written here', () => {

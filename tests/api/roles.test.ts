@@ -3,23 +3,16 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { permissions, roles, type Permission, type Role } from '@bumperline/contracts/roles';
-import { memberships } from '@bumperline/db/schema/index';
 import { buildTestApp, JSON_HEADERS, signedInAgent, type TestApp } from '../support/app.ts';
-import { createCompany, createUser, type CompanyFixture } from '../support/factories.ts';
+import { companyWithEveryRole, type CompanyFixture } from '../support/factories.ts';
 
 let t: TestApp;
 let company: CompanyFixture;
-const people = {} as Record<Role, string>;
+let people: Record<Role, string>;
 
 beforeAll(async () => {
   t = await buildTestApp();
-  company = await createCompany(t.db.owner, 'Gamma Coin', 2);
-  people.owner = company.ownerEmail;
-  for (const role of roles.filter((r) => r !== 'owner')) {
-    const u = await createUser(t.db.owner, { email: `${role}@gamma.test` });
-    await t.db.owner.insert(memberships).values({ tenantId: company.tenantId, userId: u.id, role });
-    people[role] = u.email;
-  }
+  ({ company, people } = await companyWithEveryRole(t.db.owner, 'Gamma Coin'));
 });
 afterAll(() => t.close());
 

@@ -2,9 +2,8 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sql } from 'drizzle-orm';
-import { memberships } from '@bumperline/db/schema/index';
 import { buildTestApp, JSON_HEADERS, signedInAgent, type TestApp } from '../support/app.ts';
-import { createCompany, createUser, type CompanyFixture } from '../support/factories.ts';
+import { createCompany, createMember, type CompanyFixture } from '../support/factories.ts';
 
 let t: TestApp;
 let company: CompanyFixture;
@@ -77,8 +76,7 @@ describe('invitations', () => {
 
 describe('members', () => {
   it('removing a member takes effect on their very next request', async () => {
-    const tech = await createUser(t.db.owner, { email: 'leaving@gamma.test' });
-    await t.db.owner.insert(memberships).values({ tenantId: company.tenantId, userId: tech.id, role: 'technician' });
+    const tech = await createMember(t.db.owner, company.tenantId, 'technician', { email: 'leaving@gamma.test' });
     const techAgent = await signedInAgent(t, tech.email);
     await techAgent.get('/api/venues').expect(200);
     const owner = await signedInAgent(t, company.ownerEmail);

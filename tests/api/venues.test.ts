@@ -3,11 +3,11 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sql } from 'drizzle-orm';
-import { buildTestApp, JSON_HEADERS, signedInAgent, type Agent, type TestApp } from '../support/app.ts';
-import { createCompany, type CompanyFixture } from '../support/factories.ts';
+import { buildTestApp, JSON_HEADERS, type Agent, type TestApp } from '../support/app.ts';
+import type { CompanyFixture } from '../support/factories.ts';
+import { auditCount, twoCompanies } from '../support/two-companies.ts';
 
 let t: TestApp;
-let a: CompanyFixture;
 let b: CompanyFixture;
 let owner: Agent;
 
@@ -22,16 +22,9 @@ const venueBody = (over: Record<string, unknown> = {}) => ({
 
 beforeAll(async () => {
   t = await buildTestApp();
-  a = await createCompany(t.db.owner, 'Alpha Amusements', 3);
-  b = await createCompany(t.db.owner, 'Beta Games', 2);
-  owner = await signedInAgent(t, a.ownerEmail);
+  ({ b, owner } = await twoCompanies(t));
 });
 afterAll(() => t.close());
-
-async function auditCount(entityId: string): Promise<number> {
-  const r = await t.db.owner.execute(sql`select count(*)::int as n from audit_log where entity_id = ${entityId}`);
-  return (r.rows[0] as { n: number }).n;
-}
 
 describe('venues', () => {
   it('create, read, update and retire, each written to the audit log', async () => {
@@ -51,7 +44,7 @@ describe('venues', () => {
     expect(list.body.items.some((v: { id: string }) => v.id === id)).toBe(false);
     const withRetired = await owner.get('/api/venues?limit=200&includeRetired=true').expect(200);
     expect(withRetired.body.items.some((v: { id: string }) => v.id === id)).toBe(true);
-    expect(await auditCount(id)).toBe(3);
+    expect(await auditCount(t.db.owner, id)).toBe(3);
     const activity = await owner.get(`/api/activity?entityId=${id}`).expect(200);
     expect(activity.body.items.map((e: { action: string }) => e.action)).toEqual(['retire', 'update', 'create']);
     expect(activity.body.items[1].changes.name).toEqual({ from: 'Juniper Lanes', to: 'Juniper Lanes & Grill' });

@@ -43,15 +43,31 @@ describe('sign-up', () => {
     expect(mail?.subject).toMatch(/confirm/i);
     const token = tokenIn(mail?.text);
     expect(mail?.text).toContain(`/verify-email?token=${token}`);
-    await request(t.app).post('/api/account/verify-email').set(JSON_HEADERS).send({ token }).expect(204);
+    // Confirming needs the password chosen at sign-up; a wrong one is named and leaves the link unused.
+    const wrong = await request(t.app)
+      .post('/api/account/verify-email')
+      .set(JSON_HEADERS)
+      .send({ token, password: 'not the one' })
+      .expect(400);
+    expect(wrong.body.errors).toEqual([{ field: 'password', message: 'is not the password chosen at sign-up' }]);
+    expect(await signInOutcome(agent, 'una@verify.test', 'una passphrase 1')).toBe('unverified');
+    await request(t.app).post('/api/account/verify-email').set(JSON_HEADERS).send({ token, password: 'una passphrase 1' }).expect(204);
     expect(await signInOutcome(agent, 'una@verify.test', 'una passphrase 1')).toBe('ok');
     const me = await agent.get('/api/account/me').expect(200);
     expect(me.body).toMatchObject({ role: 'owner', company: { name: 'Signup Test Co' } });
 
     // The link works once; a bad token names the field and changes nothing.
-    const again = await request(t.app).post('/api/account/verify-email').set(JSON_HEADERS).send({ token }).expect(400);
+    const again = await request(t.app)
+      .post('/api/account/verify-email')
+      .set(JSON_HEADERS)
+      .send({ token, password: 'una passphrase 1' })
+      .expect(400);
     expect(again.body.errors).toEqual([{ field: 'token', message: expect.any(String) }]);
-    const bad = await request(t.app).post('/api/account/verify-email').set(JSON_HEADERS).send({ token: 'x' }).expect(400);
+    const bad = await request(t.app)
+      .post('/api/account/verify-email')
+      .set(JSON_HEADERS)
+      .send({ token: 'x', password: 'una passphrase 1' })
+      .expect(400);
     expect(bad.body.errors[0].field).toBe('token');
   });
 
@@ -66,7 +82,11 @@ describe('sign-up', () => {
     const second = tokenIn(t.mail.lastTo('late@verify.test')?.text);
     expect(second).toBeTruthy();
     expect(second).not.toBe(first);
-    await request(t.app).post('/api/account/verify-email').set(JSON_HEADERS).send({ token: second }).expect(204);
+    await request(t.app)
+      .post('/api/account/verify-email')
+      .set(JSON_HEADERS)
+      .send({ token: second, password: 'late passphrase 1' })
+      .expect(204);
     expect(await signInOutcome(request.agent(t.app), 'late@verify.test', 'late passphrase 1')).toBe('ok');
     // A proven address gets no confirmation mail.
     const before = mailsTo('late@verify.test').length;
@@ -146,7 +166,11 @@ describe('someone signs up with another person’s address', () => {
       .expect(204);
     // The reset proved the address and kept the password the person chose with it.
     expect(await signInOutcome(request.agent(t.app), 'reset-first@verify.test', 'owner chose this one')).toBe('ok');
-    await request(t.app).post('/api/account/verify-email').set(JSON_HEADERS).send({ token: confirmation }).expect(400);
+    await request(t.app)
+      .post('/api/account/verify-email')
+      .set(JSON_HEADERS)
+      .send({ token: confirmation, password: 'attacker passphrase 2' })
+      .expect(400);
     expect(await signInOutcome(request.agent(t.app), 'reset-first@verify.test', 'attacker passphrase 2')).toBe('credentials');
   });
 });

@@ -170,6 +170,7 @@ test('sign up: confirm the address by e-mail, then sign in to the new company; s
 
   await page.goto(await mailedLink(request, email, /Confirm/));
   await expect(page.getByRole('heading', { name: 'Confirm your e-mail address' })).toBeVisible();
+  await page.getByLabel('Password').fill(password);
   await scan(page, 'verify-email');
   await page.getByRole('button', { name: 'Confirm my address' }).click();
   await expect(page.getByRole('status')).toContainText('address is confirmed');
@@ -199,7 +200,9 @@ test('password reset by e-mail', async ({ page, request }) => {
   });
   expect(signUp.status()).toBe(202);
   const confirm = new URL(await mailedLink(request, email, /Confirm/), 'http://x').searchParams.get('token');
-  expect((await request.post('/api/account/verify-email', { headers, data: { token: confirm } })).status()).toBe(204);
+  expect(
+    (await request.post('/api/account/verify-email', { headers, data: { token: confirm, password: 'the first passphrase' } })).status(),
+  ).toBe(204);
 
   await page.goto('/forgot-password');
   await page.getByLabel('E-mail').fill(email);

@@ -148,10 +148,15 @@ test('report → dispatch → SMS accept → fix → venue sees it closed, downt
   await scan(contact, 'story-6-venue-view');
   // The venue was also e-mailed when the call opened and when it closed: both are in the captured mail.
   const mailPage = await newPage(browser, true);
-  await mailPage.goto('/dev/outbox');
-  for (const what of ['opened', 'closed']) {
-    await expect(mailPage.getByRole('heading', { name: `Service call ${what}: ${game.model.title}` }).first()).toBeVisible();
-  }
+  // The outbox worker sends on its own schedule: look again until the closing notice has gone out.
+  await expect(async () => {
+    await mailPage.goto('/dev/outbox');
+    for (const what of ['opened', 'closed']) {
+      await expect(mailPage.getByRole('heading', { name: `Service call ${what}: ${game.model.title}` }).first()).toBeVisible({
+        timeout: 1000,
+      });
+    }
+  }).toPass({ timeout: 45_000 });
   await mailPage.screenshot({ path: 'e2e/screenshots/story-6-venue-mail.png', fullPage: true });
 
   // 7. The game is running again and its downtime interval is recorded with an end.

@@ -11,6 +11,7 @@ import { createApp } from '@bumperline/api/app';
 import { createLogger } from '@bumperline/api/http/logger';
 import { createMailer } from '@bumperline/api/services/mailer';
 import { folderPhotoStore } from '@bumperline/api/services/photo-store';
+import type { Db } from '@bumperline/db/client';
 import { hashPassword } from '@bumperline/db/passwords';
 import { freshDatabase, type TestDatabase } from '../support/database.ts';
 import { createCompany, createUser } from '../support/factories.ts';
@@ -21,6 +22,19 @@ beforeAll(async () => {
   db = await freshDatabase();
 });
 afterAll(() => db.drop());
+
+/** The real app over this database, logging through the given logger (as production does). */
+function appLoggingTo(db: Db, logger: ReturnType<typeof createLogger>) {
+  return createApp({
+    db,
+    mailer: createMailer({ fakePort: 1, from: 'x@y.test' }),
+    logger,
+    authSecret: 'test-secret-that-is-at-least-32-characters-long',
+    smsAuthToken: 'test-twilio-auth-token',
+    photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
+    appOrigin: 'http://127.0.0.1:3999',
+  });
+}
 
 function capture() {
   const lines: string[] = [];
@@ -36,15 +50,7 @@ function capture() {
 describe('production logs', () => {
   it('hold one short line per request, with tokens in URLs redacted and no headers', async () => {
     const { lines, logger } = capture();
-    const app = createApp({
-      db: db.app,
-      mailer: createMailer({ fakePort: 1, from: 'x@y.test' }),
-      logger,
-      authSecret: 'test-secret-that-is-at-least-32-characters-long',
-      smsAuthToken: 'test-twilio-auth-token',
-      photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
-      appOrigin: 'http://127.0.0.1:3999',
-    });
+    const app = appLoggingTo(db.app, logger);
     const company = await createCompany(db.owner, 'Quiet Logs', 1);
     const tag = (await db.owner.execute(sql`select tag_token from games where id = ${company.gameIds[0]!}`)).rows[0] as {
       tag_token: string;
@@ -90,15 +96,7 @@ describe('production logs', () => {
     const broken = await freshDatabase();
     try {
       await broken.owner.execute(sql`drop table venues cascade`);
-      const app = createApp({
-        db: broken.app,
-        mailer: createMailer({ fakePort: 1, from: 'x@y.test' }),
-        logger,
-        authSecret: 'test-secret-that-is-at-least-32-characters-long',
-        smsAuthToken: 'test-twilio-auth-token',
-        photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
-        appOrigin: 'http://127.0.0.1:3999',
-      });
+      const app = appLoggingTo(broken.app, logger);
       const company = await createCompany(broken.owner, 'Broken Tables', 0).catch(() => undefined);
       expect(company).toBeUndefined(); // the factory needs venues too: the table really is gone
       const owner = await createUser(broken.owner, { email: 'broken-owner@example.test' });

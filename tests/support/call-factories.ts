@@ -4,20 +4,16 @@ import { randomBytes } from 'node:crypto';
 import { and, asc, eq } from 'drizzle-orm';
 import { withScope, type Db } from '@bumperline/db/client';
 import { getCallRow } from '@bumperline/db/queries/calls';
-import { callEvents, games, memberships, outbox, serviceCalls } from '@bumperline/db/schema/index';
+import { callEvents, games, outbox, serviceCalls } from '@bumperline/db/schema/index';
 import { assignCall, openCall } from '@bumperline/api/services/service-calls';
 import type { ProblemKind, Severity } from '@bumperline/contracts/calls';
-import { createUser, type CompanyFixture } from './factories.ts';
+import { createMember, type CompanyFixture, type MemberRole } from './factories.ts';
 import { ORIGIN } from './app.ts';
 import type { TestDatabase } from './database.ts';
 
-type MemberRole = (typeof memberships.$inferInsert)['role'];
-
 /** A person in the company with this role and (optionally) a mobile number. */
-export async function addMember(owner: Db, tenantId: string, role: MemberRole, phone: string | null = null, name = `Test ${role}`) {
-  const user = await createUser(owner, { name, phone });
-  await owner.insert(memberships).values({ tenantId, userId: user.id, role });
-  return user;
+export function addMember(owner: Db, tenantId: string, role: MemberRole, phone: string | null = null, name = `Test ${role}`) {
+  return createMember(owner, tenantId, role, { name, phone });
 }
 
 export function addTechnician(owner: Db, tenantId: string, phone: string | null, name = 'Test Technician') {

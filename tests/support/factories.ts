@@ -3,6 +3,7 @@ import { randomBytes, randomUUID } from 'node:crypto';
 import type { Db } from '@bumperline/db/client';
 import { gameModels, games, memberships, tenants, users, venues } from '@bumperline/db/schema/index';
 import { hashPassword } from '@bumperline/db/passwords';
+import { roles, type Role } from '@bumperline/contracts/roles';
 
 export interface CompanyFixture {
   tenantId: string;
@@ -12,6 +13,8 @@ export interface CompanyFixture {
   gameIds: string[];
   modelId: string;
 }
+
+export type MemberRole = (typeof memberships.$inferInsert)['role'];
 
 export const TEST_PASSWORD = 'correct horse battery staple';
 
@@ -72,4 +75,29 @@ export async function createCompany(db: Db, name: string, venueCount = 2): Promi
     gameIds: gameRows.map((g) => g.id),
     modelId: model!.id,
   };
+}
+
+/** A new person (createUser's overrides apply) who belongs to the company with this role. */
+export async function createMember(db: Db, tenantId: string, role: MemberRole, overrides: Partial<typeof users.$inferInsert> = {}) {
+  const user = await createUser(db, overrides);
+  await db.insert(memberships).values({ tenantId, userId: user.id, role });
+  return user;
+}
+
+/**
+ * A company (createCompany) with one person in every role: its owner, and for each other role a person at
+ * `<role>@<company name as a slug>.test`. `people` holds each role's e-mail address (the password is TEST_PASSWORD).
+ */
+export async function companyWithEveryRole(
+  db: Db,
+  name: string,
+  venueCount = 2,
+): Promise<{ company: CompanyFixture; people: Record<Role, string> }> {
+  const company = await createCompany(db, name, venueCount);
+  const domain = `${name.toLowerCase().replace(/[^a-z0-9]+/g, '-')}.test`;
+  const people = { owner: company.ownerEmail } as Record<Role, string>;
+  for (const role of roles.filter((r) => r !== 'owner')) {
+    people[role] = (await createMember(db, company.tenantId, role, { email: `${role}@${domain}` })).email;
+  }
+  return { company, people };
 }

@@ -3,7 +3,12 @@
 // outbox messages and a photo, and audit entries. Rows are arranged as the owner role or through the real
 // query and service functions inside the company's row-level-security scope.
 import { randomBytes } from 'node:crypto';
+import { mkdtemp, rm } from 'node:fs/promises';
+import os from 'node:os';
+import path from 'node:path';
 import sharp from 'sharp';
+import request from 'supertest';
+import type { Role } from '@bumperline/contracts/roles';
 import { withScope } from '@bumperline/db/client';
 import { getSettings } from '@bumperline/db/queries/settings';
 import { recordAudit } from '@bumperline/db/queries/audit';
@@ -12,7 +17,8 @@ import { linkVenueContact } from '@bumperline/db/queries/venue-contacts';
 import { technicianProfiles } from '@bumperline/db/schema/index';
 import { newToken } from '@bumperline/api/auth/tokens';
 import { preparePhoto, savePhoto } from '@bumperline/api/services/photo-intake';
-import type { PhotoStore } from '@bumperline/api/services/photo-store';
+import { folderPhotoStore, type PhotoStore } from '@bumperline/api/services/photo-store';
+import { buildTestApp, signedInAgent, type Agent, type TestApp } from './app.ts';
 import { addMember, addTechnician, assignServiceCall, openServiceCall } from './call-factories.ts';
 import { createCompany, type CompanyFixture } from './factories.ts';
 import type { TestDatabase } from './database.ts';
@@ -101,4 +107,37 @@ export async function createFullCompany(db: TestDatabase, name: string, photos: 
     assignedCallId,
     photoId,
   };
+}
+
+export interface FullCompanyApp {
+  t: TestApp;
+  company: FullCompany;
+  /** An agent signed in as the company's person of each role, and one signed out. */
+  agents: Record<Role | 'signed-out', Agent>;
+  /** Closes the app and removes the company's photos. */
+  close(): Promise<void>;
+}
+
+/** The test app (buildTestApp) with a full company in it, its photos in a folder of their own. */
+export async function appWithFullCompany(name: string): Promise<FullCompanyApp> {
+  const t = await buildTestApp();
+  const photoDir = await mkdtemp(path.join(os.tmpdir(), 'bumperline-full-company-photos-'));
+  const close = async () => {
+    await t.close();
+    await rm(photoDir, { recursive: true, force: true });
+  };
+  try {
+    const company = await createFullCompany(t.db, name, folderPhotoStore(photoDir));
+    const agents = {
+      owner: await signedInAgent(t, company.ownerEmail),
+      dispatcher: await signedInAgent(t, company.dispatcher.email),
+      technician: await signedInAgent(t, company.technician.email),
+      venue_contact: await signedInAgent(t, company.venueContact.email),
+      'signed-out': request.agent(t.app),
+    };
+    return { t, company, agents, close };
+  } catch (err) {
+    await close();
+    throw err;
+  }
 }

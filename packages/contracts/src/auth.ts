@@ -27,8 +27,15 @@ export type SignUpInput = z.input<typeof signUpInput>;
 export const passwordResetRequest = z.strictObject({ email });
 const emailedToken = z.string().min(20, { error: 'is not a link we sent' }).max(200, { error: 'is not a link we sent' });
 export const passwordResetConfirm = z.strictObject({ token: emailedToken, password });
-/** Opening the link that confirms a new sign-up's address. */
-export const verifyEmailInput = z.strictObject({ token: emailedToken });
+/**
+ * Opening the link that confirms a new sign-up's address, with the password chosen at sign-up: someone
+ * who did not sign up (the address's real owner, clicking a link they never asked for) cannot confirm a
+ * stranger's password onto their own address.
+ */
+export const verifyEmailInput = z.strictObject({
+  token: emailedToken,
+  password: z.string().min(1, { error: 'is required' }).max(200, { error: 'is not the password chosen at sign-up' }),
+});
 
 /** What sign-up answers, whether or not the address already has an account. */
 export const signUpAnswer = { status: 'check-your-email' } as const;

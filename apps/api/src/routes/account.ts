@@ -25,7 +25,7 @@ import {
   updateUser,
 } from '@bumperline/db/queries/identity';
 import { recordEmailProof } from '@bumperline/db/queries/email-proof';
-import { hashPassword } from '@bumperline/db/passwords';
+import { hashPassword, verifyPassword } from '@bumperline/db/passwords';
 import { ValidationError } from '../http/errors.ts';
 import { requireActor } from '../http/guards.ts';
 import { parse } from '../http/validate.ts';
@@ -73,14 +73,19 @@ export function accountRouter(deps: {
     res.status(202).json(signUpAnswer);
   });
 
-  // The link in the confirmation e-mail: the sign-up's password is kept, since this link vouches for it.
+  // The link in the confirmation e-mail, opened with the sign-up's password: only then is that password kept.
+  // A wrong password leaves the link unused (the transaction rolls back), and says so beside the field.
   r.post('/verify-email', async (req, res) => {
-    const { token } = parse(verifyEmailInput, req.body);
+    const { token, password } = parse(verifyEmailInput, req.body);
     const email = await db.transaction(async (tx) => {
       const userId = await consumeEmailToken(tx, token, 'verify-email');
       if (!userId) return undefined;
+      const user = await findUserById(tx, userId);
+      if (!user || !(await verifyPassword(user.passwordHash, password))) {
+        throw new ValidationError([{ field: 'password', message: 'is not the password chosen at sign-up' }]);
+      }
       await recordEmailProof(tx, userId, { keepPassword: true });
-      return (await findUserById(tx, userId))?.email;
+      return user.email;
     });
     if (!email) throw new ValidationError([{ field: 'token', message: 'is invalid, used or expired: ask for a new link' }]);
     await signInLimiter.addressProven(email);

@@ -8,7 +8,7 @@ export function confirmAddressMail(to: string, origin: string, token: string): M
   return {
     to,
     subject: 'Confirm your e-mail address for Bumperline',
-    text: `Someone signed up for Bumperline with ${to}. If it was you, confirm the address here (valid for 24 hours, once):\n${link}\n\nIf it was not you, ignore this message: nobody can sign in with that sign-up until the address is confirmed.`,
+    text: `Someone signed up for Bumperline with ${to}. If it was you, confirm the address here with the password you chose (valid for 24 hours, once):\n${link}\n\nIf it was not you, ignore this message: nobody can sign in with that sign-up until the address is confirmed.`,
   };
 }
 

@@ -1,15 +1,37 @@
-// Opening the link that confirms a new sign-up's address: one button, so mail scanners that prefetch
-// links do not use it up, then on to sign in.
-import { useState } from 'react';
+// Opening the link that confirms a new sign-up's address. The person enters the password they chose at
+// sign-up: the owner of an address who never signed up cannot confirm a stranger's account onto it by
+// clicking. A form (not a bare link) also keeps mail scanners that prefetch links from using it up.
+import { useState, type FormEvent } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
+import { Field, inputClass } from '../../components/field.tsx';
 import { ApiError, post } from '../../lib/api-client.ts';
 import { paths } from '../../lib/paths.ts';
 import { AuthLayout, FormAlert } from './auth-layout.tsx';
 
+type State = 'idle' | 'busy' | 'done' | 'failed' | 'unreachable';
+
 export function VerifyEmailPage() {
   const [sp] = useSearchParams();
   const token = sp.get('token') ?? '';
-  const [state, setState] = useState<'idle' | 'busy' | 'done' | 'failed' | 'unreachable'>('idle');
+  const [state, setState] = useState<State>('idle');
+  const [password, setPassword] = useState('');
+  const [passwordError, setPasswordError] = useState<string>();
+
+  async function onSubmit(e: FormEvent) {
+    e.preventDefault();
+    if (!password) return setPasswordError('Enter the password you chose when you signed up.');
+    setState('busy');
+    setPasswordError(undefined);
+    try {
+      await post('/api/account/verify-email', { token, password });
+      setState('done');
+    } catch (err) {
+      if (err instanceof ApiError && err.fieldErrors().password) {
+        setPasswordError('That is not the password chosen at sign-up.');
+        setState('idle');
+      } else setState(err instanceof ApiError && err.status === 400 ? 'failed' : 'unreachable');
+    }
+  }
 
   if (state === 'done')
     return (
@@ -33,23 +55,31 @@ export function VerifyEmailPage() {
         </FormAlert>
       )}
       {state === 'unreachable' && <FormAlert>Could not reach Bumperline. Check the connection and try again.</FormAlert>}
-      <p className="mb-4">Confirm that this address is yours to finish setting up your Bumperline account.</p>
-      <button
-        type="button"
-        className="btn-primary w-full"
-        disabled={state === 'busy' || !token}
-        onClick={async () => {
-          setState('busy');
-          try {
-            await post('/api/account/verify-email', { token });
-            setState('done');
-          } catch (err) {
-            setState(err instanceof ApiError && err.status === 400 ? 'failed' : 'unreachable');
-          }
-        }}
-      >
-        {state === 'busy' ? 'Confirming…' : 'Confirm my address'}
-      </button>
+      <form onSubmit={onSubmit} noValidate className="grid gap-4">
+        <p>Enter the password you chose when you signed up, to confirm that this address is yours.</p>
+        <Field label="Password" error={passwordError}>
+          {(a) => (
+            <input
+              {...a}
+              type="password"
+              autoComplete="current-password"
+              className={inputClass}
+              value={password}
+              onChange={(e) => setPassword(e.target.value)}
+            />
+          )}
+        </Field>
+        <button type="submit" className="btn-primary w-full" disabled={state === 'busy' || !token}>
+          {state === 'busy' ? 'Confirming…' : 'Confirm my address'}
+        </button>
+        <p className="text-sm text-ink-muted">
+          Did not sign up? You can ignore the e-mail, or{' '}
+          <Link className="underline" to={paths.forgotPassword}>
+            set a password of your own
+          </Link>{' '}
+          for this address.
+        </p>
+      </form>
     </AuthLayout>
   );
 }
