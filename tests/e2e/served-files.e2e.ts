@@ -22,3 +22,13 @@ test('the served folder holds no source maps, and asking for one finds nothing',
   expect(await js.text()).not.toContain('sourceMappingURL');
   expect((await request.get(`${script}.map`)).status()).toBe(404);
 });
+
+test('bundles go out compressed and are kept for good; the app shell is checked each time', async ({ request }) => {
+  const shell = await request.get('/', { headers: { 'Accept-Encoding': 'gzip' } });
+  expect(shell.headers()['cache-control']).toBe('no-cache');
+  const script = /<script[^>]+src="(\/assets\/[^"]+\.js)"/.exec(await shell.text())?.[1];
+  const js = await request.get(script!, { headers: { 'Accept-Encoding': 'gzip' } });
+  expect(js.headers()['content-encoding']).toBe('gzip');
+  expect(js.headers()['cache-control']).toMatch(/immutable/);
+  expect(js.headers()['cache-control']).toMatch(/max-age=31536000/);
+});

@@ -2,6 +2,7 @@
 import { existsSync } from 'node:fs';
 import path from 'node:path';
 import express, { type Express, type Router } from 'express';
+import compression from 'compression';
 import helmet from 'helmet';
 import type { Logger } from 'pino';
 import { ExpressAuth } from '@auth/express';
@@ -58,6 +59,8 @@ export function createApp(deps: AppDeps): Express {
   app.set('trust proxy', deps.trustProxy ?? 'loopback');
   app.set('query parser', 'simple');
   app.use(requestLogger(deps.logger));
+  // gzip/deflate for text answers (the app's bundles, JSON, HTML); images are left as they are.
+  app.use(compression());
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -126,10 +129,14 @@ export function createApp(deps: AppDeps): Express {
 
   if (deps.webDist && existsSync(path.join(deps.webDist, 'index.html'))) {
     const index = path.join(deps.webDist, 'index.html');
+    // Bundles under /assets carry a content hash in their names: a browser may keep them for good.
+    app.use('/assets', express.static(path.join(deps.webDist, 'assets'), { immutable: true, maxAge: '1y' }));
     app.use(express.static(deps.webDist, { index: false, maxAge: '1h' }));
     // Client-side routes: every other GET gets the app shell — but a missing file under /assets (a source
     // map, an old bundle) is a 404, not a page, and so is /dev/… wherever the demo's pages are not mounted.
-    app.get('/{*path}', (req, res, next) => (/^\/(assets|dev)\//.test(req.path) ? next() : res.sendFile(index)));
+    app.get('/{*path}', (req, res, next) =>
+      /^\/(assets|dev)\//.test(req.path) ? next() : res.sendFile(index, { headers: { 'Cache-Control': 'no-cache' } }),
+    );
   }
 
   app.use(notFoundHandler);
