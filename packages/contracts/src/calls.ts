@@ -2,7 +2,6 @@
 import { z } from 'zod';
 import { isoDateTime, listQueryBase, pageOf, rowVersion, shortText, uuid } from './common.ts';
 import { gameKinds } from './games.ts';
-import { phoneNumber } from './phone.ts';
 
 export const problemKinds = ['dead', 'no_credit', 'ball_stuck', 'no_sound', 'display_out', 'other'] as const;
 export type ProblemKind = (typeof problemKinds)[number];
@@ -99,18 +98,6 @@ export const callStateGroups = {
 export function inStateGroup(group: keyof typeof callStateGroups, state: CallState): boolean {
   return (callStateGroups[group] as readonly CallState[]).includes(state);
 }
-
-/** Public report from a game tag (no sign-in). */
-export const publicReportInput = z.strictObject({
-  problem: z.enum(problemKinds, { error: 'choose what is wrong' }),
-  note: shortText(1000).default(''),
-  phone: z.union([z.literal(''), phoneNumber]).default(''),
-  smsConsent: z
-    .union([z.boolean(), z.literal('on'), z.literal('yes')])
-    .transform((v) => v === true || v === 'on' || v === 'yes')
-    .default(false),
-});
-export type PublicReportInput = z.input<typeof publicReportInput>;
 
 /** A call opened by staff or from the venue view. */
 export const openCallInput = z.strictObject({
