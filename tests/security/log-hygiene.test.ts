@@ -44,7 +44,7 @@ function capture() {
       cb();
     },
   });
-  return { lines, logger: createLogger({ level: 'info', production: true, destination: sink }) };
+  return { lines, logger: createLogger({ level: 'info', destination: sink }) };
 }
 
 describe('production logs', () => {

@@ -23,10 +23,9 @@ try {
   console.error(err.message);
   process.exit(1);
 }
-const logger = createLogger({ level: env.LOG_LEVEL, production: env.NODE_ENV === 'production' });
+const logger = createLogger({ level: env.LOG_LEVEL });
 const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../..');
 const dataDir = path.join(repoRoot, '.data');
-const demo = env.mode === 'demo';
 
 let cluster: Cluster | undefined;
 const adminUrl = env.DATABASE_URL ?? (cluster = await startCluster({ mode: env.DB_CLUSTER, log: (m) => logger.info(m) })).adminUrl;
@@ -72,7 +71,7 @@ const app = createApp({
 const jobs = startJobs({ db, sms: smsSender, mailer, logger, appOrigin: env.appOrigin });
 const server = app.listen(env.PORT, env.HOST, () => {
   const at = `http://${env.HOST}:${env.PORT}`;
-  if (demo) {
+  if (demoKit) {
     console.log(
       [
         '',

@@ -5,10 +5,10 @@
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import pino, { type DestinationStream, type Logger } from 'pino';
 import { pinoHttp, type Options } from 'pino-http';
+import { UUID } from './params.ts';
 
 export const REDACTED = '[redacted]';
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 // Our one-time tokens are base64url of 18+ random bytes; a path segment like that is a secret, a UUID is an id.
 const TOKEN_LIKE = /^[A-Za-z0-9_-]{16,}$/;
 
@@ -76,7 +76,7 @@ function stripParams(message: string): string {
   return cut === -1 ? message : message.slice(0, cut);
 }
 
-export function createLogger(opts: { level: string; production: boolean; destination?: DestinationStream }): Logger {
+export function createLogger(opts: { level: string; destination?: DestinationStream }): Logger {
   const options = {
     level: opts.level,
     serializers: { err: serializeError, error: serializeError },

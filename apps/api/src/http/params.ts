@@ -1,7 +1,8 @@
 import type { Request } from 'express';
 import { NotFoundError } from './errors.ts';
 
-const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+/** An id as our tables issue them (a UUID). */
+export const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** The :id path parameter; anything that is not an id cannot name a row, so it is simply not found. */
 export function idParam(req: Request, name = 'id'): string {

@@ -29,11 +29,11 @@ import { hashPassword, verifyPassword } from '@bumperline/db/passwords';
 import { ValidationError } from '../http/errors.ts';
 import { requireActor } from '../http/guards.ts';
 import { parse } from '../http/validate.ts';
-import { consumeEmailToken, endEmailTokensOf, issueEmailToken } from '@bumperline/db/queries/email-tokens';
-import type { Mailer } from '../services/mailer.ts';
+import { consumeEmailToken, endEmailTokensOf, issueEmailToken, type EmailTokenPurpose } from '@bumperline/db/queries/email-tokens';
+import type { Mail, Mailer } from '../services/mailer.ts';
 import { confirmAddressMail, passwordResetMail, signInLinkMail, signUpWithTakenAddressMail } from '../services/account-mail.ts';
 import type { SignInLimiter } from '../auth/sign-in-limiter.ts';
-import type { AccountMailLimiter } from '../auth/account-mail-limiter.ts';
+import type { AccountMailKind, AccountMailLimiter } from '../auth/account-mail-limiter.ts';
 
 const RESET_TTL_MS = 60 * 60_000;
 const LINK_TTL_MS = 20 * 60_000;
@@ -49,6 +49,27 @@ export function accountRouter(deps: {
 }): Router {
   const { db, mailer, appOrigin, signInLimiter, mailLimiter } = deps;
   const r = Router();
+
+  /**
+   * Mails a one-time link to an address that has an account (and, with `unless`, is not in that state),
+   * within the hourly cap. Its callers answer 202 either way, so the form reveals nothing.
+   */
+  async function mailLinkIfKnown(
+    kind: AccountMailKind,
+    email: string,
+    link: {
+      purpose: EmailTokenPurpose;
+      ttlMs: number;
+      mail: (to: string, origin: string, token: string) => Mail;
+      unless?: (user: { emailVerifiedAt: Date | null }) => boolean;
+    },
+  ): Promise<void> {
+    if (!(await mailLimiter.allow(kind, email))) return;
+    const user = await findUserByEmail(db, email);
+    if (!user || link.unless?.(user)) return;
+    const token = await issueEmailToken(db, user.id, link.purpose, link.ttlMs);
+    await mailer.send(link.mail(user.email, appOrigin, token));
+  }
 
   // A new address gets its company and a confirmation link; an address that has an account gets a
   // notice instead. Both answer 202 "check your e-mail", after the same work (the hash included).
@@ -95,13 +116,12 @@ export function accountRouter(deps: {
   // Another confirmation link, for an address not yet confirmed. Always 202.
   r.post('/verify-email/resend', async (req, res) => {
     const { email } = parse(passwordResetRequest, req.body);
-    if (await mailLimiter.allow('sign-up', email)) {
-      const user = await findUserByEmail(db, email);
-      if (user && !user.emailVerifiedAt) {
-        const token = await issueEmailToken(db, user.id, 'verify-email', CONFIRM_TTL_MS);
-        await mailer.send(confirmAddressMail(user.email, appOrigin, token));
-      }
-    }
+    await mailLinkIfKnown('sign-up', email, {
+      purpose: 'verify-email',
+      ttlMs: CONFIRM_TTL_MS,
+      mail: confirmAddressMail,
+      unless: (user) => !!user.emailVerifiedAt,
+    });
     res.status(202).json(sentIfKnown);
   });
 
@@ -135,13 +155,7 @@ export function accountRouter(deps: {
   // Always 202, whether or not the address has an account, so the form reveals nothing.
   r.post('/password-reset', async (req, res) => {
     const { email } = parse(passwordResetRequest, req.body);
-    if (await mailLimiter.allow('password-reset', email)) {
-      const user = await findUserByEmail(db, email);
-      if (user) {
-        const token = await issueEmailToken(db, user.id, 'password-reset', RESET_TTL_MS);
-        await mailer.send(passwordResetMail(user.email, appOrigin, token));
-      }
-    }
+    await mailLinkIfKnown('password-reset', email, { purpose: 'password-reset', ttlMs: RESET_TTL_MS, mail: passwordResetMail });
     res.status(202).json(sentIfKnown);
   });
 
@@ -167,13 +181,7 @@ export function accountRouter(deps: {
   // E-mailed sign-in link (venue contacts have no password; anyone whose password sign-in is paused). Also always 202.
   r.post('/sign-in-link', async (req, res) => {
     const { email } = parse(passwordResetRequest, req.body);
-    if (await mailLimiter.allow('sign-in-link', email)) {
-      const user = await findUserByEmail(db, email);
-      if (user) {
-        const token = await issueEmailToken(db, user.id, 'sign-in', LINK_TTL_MS);
-        await mailer.send(signInLinkMail(user.email, appOrigin, token));
-      }
-    }
+    await mailLinkIfKnown('sign-in-link', email, { purpose: 'sign-in', ttlMs: LINK_TTL_MS, mail: signInLinkMail });
     res.status(202).json(sentIfKnown);
   });
 

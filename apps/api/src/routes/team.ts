@@ -2,7 +2,7 @@
 import { Router } from 'express';
 import { acceptInvitationInput, invitationInput, memberRoleUpdate } from '@bumperline/contracts/team';
 import { roleLabels } from '@bumperline/contracts/roles';
-import { withScope, type Db } from '@bumperline/db/client';
+import { withScope, type Db, type Tx } from '@bumperline/db/client';
 import {
   addMember,
   claimInvitation,
@@ -165,35 +165,25 @@ export function invitationsRouter(db: Db): Router {
 
   // An account whose address nobody has confirmed does not count: the invitee holds a link mailed to the
   // address, which proves it, and takes that account over as if it were new (see email-proof.ts).
-  const provenAccount = async (email: string) => {
-    const user = await findUserByEmail(db, email);
+  const provenAccount = async (executor: Db | Tx, email: string) => {
+    const user = await findUserByEmail(executor, email);
     return { user, proven: user?.emailVerifiedAt ? user : undefined };
   };
 
   r.get('/:token', async (req, res) => {
     const inv = await lookup(req.params.token);
-    const { proven } = await provenAccount(inv.email);
+    const { proven } = await provenAccount(db, inv.email);
     res.json({ companyName: inv.tenantName, email: inv.email, role: inv.role, hasAccount: !!proven });
   });
 
   r.post('/:token/accept', async (req, res) => {
     const inv = await lookup(req.params.token);
     const input = parse(acceptInvitationInput, req.body ?? {});
-    const { user, proven } = await provenAccount(inv.email);
-    if (proven) {
-      // Joining with an existing account needs that account signed in.
-      if (req.actor?.userId !== proven.id) {
-        throw new HttpError(409, 'Sign in first', `Sign in as ${inv.email} to accept this invitation.`, undefined, 'sign-in-required');
-      }
-    } else {
-      const errors = [];
-      if (!input.name) errors.push({ field: 'name', message: 'is required' });
-      if (!input.password) errors.push({ field: 'password', message: 'is required' });
-      if (errors.length) throw new ValidationError(errors);
-    }
-    const passwordHash = proven ? null : await hashPassword(input.password!);
+    // Hashed before the transaction, so it holds its connection only for the writes.
+    const newPasswordHash = input.password ? await hashPassword(input.password) : null;
     const userId = await withScope(db, { tenantId: inv.tenantId }, async (tx) => {
-      // First, so that of simultaneous accepts one goes on and the others stop here, having written nothing.
+      // First, so that of simultaneous accepts one goes on and the others stop here, having written nothing
+      // (and before the account check below, which a winner that just committed would otherwise change).
       if (!(await claimInvitation(tx, inv.id))) {
         throw new HttpError(
           409,
@@ -203,6 +193,20 @@ export function invitationsRouter(db: Db): Router {
           'conflict',
         );
       }
+      // Any refusal below rolls the claim back with the transaction.
+      const { user, proven } = await provenAccount(tx, inv.email);
+      if (proven) {
+        // Joining with an existing account needs that account signed in.
+        if (req.actor?.userId !== proven.id) {
+          throw new HttpError(409, 'Sign in first', `Sign in as ${inv.email} to accept this invitation.`, undefined, 'sign-in-required');
+        }
+      } else {
+        const errors = [];
+        if (!input.name) errors.push({ field: 'name', message: 'is required' });
+        if (!input.password) errors.push({ field: 'password', message: 'is required' });
+        if (errors.length) throw new ValidationError(errors);
+      }
+      const passwordHash = proven ? null : newPasswordHash;
       let id: string;
       if (proven) id = proven.id;
       else if (user) {

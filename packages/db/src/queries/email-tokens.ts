@@ -5,21 +5,21 @@ import { and, eq, gt, isNull } from 'drizzle-orm';
 import type { Db, Tx } from '../client.ts';
 import { emailTokens } from '../schema/index.ts';
 
-type Purpose = (typeof emailTokens.$inferInsert)['purpose'];
+export type EmailTokenPurpose = (typeof emailTokens.$inferInsert)['purpose'];
 
 export function hashToken(token: string): string {
   return createHash('sha256').update(token).digest('hex');
 }
 
 /** Creates a token for the person; returns the raw token, which only the e-mail will carry. */
-export async function issueEmailToken(db: Db | Tx, userId: string, purpose: Purpose, ttlMs: number): Promise<string> {
+export async function issueEmailToken(db: Db | Tx, userId: string, purpose: EmailTokenPurpose, ttlMs: number): Promise<string> {
   const token = randomBytes(32).toString('base64url');
   await db.insert(emailTokens).values({ tokenHash: hashToken(token), purpose, userId, expiresAt: new Date(Date.now() + ttlMs) });
   return token;
 }
 
 /** Uses the token up; the person it was for, or undefined when it is unknown, used or expired. */
-export async function consumeEmailToken(db: Db | Tx, token: string, purpose: Purpose): Promise<string | undefined> {
+export async function consumeEmailToken(db: Db | Tx, token: string, purpose: EmailTokenPurpose): Promise<string | undefined> {
   const [used] = await db
     .update(emailTokens)
     .set({ usedAt: new Date() })

@@ -4,7 +4,7 @@ import type { Db, Tx } from '../client.ts';
 import { withScope } from '../client.ts';
 import { memberships, platformAdmins, tenants, userSessions, users } from '../schema/index.ts';
 
-export async function findUserByEmail(db: Db, email: string) {
+export async function findUserByEmail(db: Db | Tx, email: string) {
   const [u] = await db
     .select()
     .from(users)
