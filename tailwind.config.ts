@@ -8,7 +8,7 @@ export default {
   theme: {
     extend: {
       fontFamily: {
-        sans: ['"Nunito Sans"', 'system-ui', 'sans-serif'],
+        sans: ['"Nunito Sans Variable"', 'system-ui', 'sans-serif'],
       },
       colors: {
         ink: { DEFAULT: '#14213d', soft: '#334155', muted: '#475569' },

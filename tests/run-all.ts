@@ -5,6 +5,7 @@ import { existsSync } from 'node:fs';
 import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import { ensureServerInstalled } from '@bumperline/db/lifecycle/cluster';
+import { ensurePgbouncerInstalled } from '@bumperline/db/lifecycle/pgbouncer';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 const only = process.argv.find((a) => a.startsWith('--only='))?.slice(7);
@@ -37,7 +38,10 @@ if (!only || only === 'static') {
   run('Formatting', bin('prettier'), ['--check', '.', '--log-level', 'warn']);
 }
 ensureServerInstalled();
-if (!only || only === 'vitest') run('Unit and API integration tests (Vitest)', bin('vitest'), ['run']);
+if (!only || only === 'vitest') {
+  ensurePgbouncerInstalled(); // the scale-out suite puts PgBouncer in front of the test cluster
+  run('Unit and API integration tests (Vitest)', bin('vitest'), ['run']);
+}
 if (!only || only === 'e2e') {
   ensureChromium();
   run('Build the web app', bin('vite'), ['build', '--logLevel', 'warn']);

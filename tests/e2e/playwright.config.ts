@@ -1,10 +1,9 @@
-import path from 'node:path';
 import { defineConfig } from '@playwright/test';
+import { demoServerCommand, demoServerEnv, repoRoot } from '../support/demo-server.ts';
 
 // End-to-end tests drive Debian's Chromium against the real product (built web app + API) on a
 // throwaway PostgreSQL cluster with the demo data. Nothing is downloaded.
 const port = Number(process.env.E2E_PORT ?? 3100);
-const repoRoot = path.resolve(import.meta.dirname, '../..');
 
 export default defineConfig({
   testDir: '.',
@@ -33,22 +32,13 @@ export default defineConfig({
     trace: 'off',
   },
   webServer: {
-    // The tool's own binary, not npx: stopping npx would leave its node child running.
-    command: 'node_modules/.bin/tsx apps/api/src/main.ts',
+    command: demoServerCommand,
     cwd: repoRoot,
     url: `http://127.0.0.1:${port}/api/health`,
     timeout: 120_000,
     reuseExistingServer: false,
     stdout: 'ignore',
     stderr: 'pipe',
-    env: {
-      // The demo, as `npm start` runs it: fakes for mail and SMS, the demo data, the /dev pages.
-      BUMPERLINE_MODE: 'demo',
-      NODE_ENV: 'production',
-      PORT: String(port),
-      DB_CLUSTER: 'ephemeral',
-      LOG_LEVEL: 'warn',
-      AUTH_SECRET: 'e2e-secret-that-is-at-least-32-characters-long',
-    },
+    env: demoServerEnv(port),
   },
 });

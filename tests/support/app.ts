@@ -16,12 +16,15 @@ import { postgresCounter } from '@bumperline/api/http/rate-limit-counter';
 import { startMailFake, type MailFake } from '@bumperline/fakes/mail/mail-fake';
 import { startSmsFake, type SmsFake } from '@bumperline/fakes/sms/sms-fake';
 import { createSmsSender, type SmsSender } from '@bumperline/api/services/sms';
+import { createDb, type Db } from '@bumperline/db/client';
 import { freshDatabase, type TestDatabase } from './database.ts';
 import { TEST_PASSWORD } from './factories.ts';
 
 export interface TestApp {
   app: Express;
   db: TestDatabase;
+  /** The connection pool the app itself uses: `db.app`, or its own pool with `connectTo`. */
+  appDb: Db;
   mail: MailFake;
   /** With `{ sms: true }`: the SMS fake, whose signed webhooks reach this app. */
   sms?: TestSms;
@@ -67,10 +70,6 @@ async function startTestSms(): Promise<{ sms: TestSms; server: http.Server }> {
   return { sms: { fake, sender, from: SMS_FROM }, server };
 }
 
-/**
- * `signInLimit`: failed sign-ins per account before its password sign-in pauses (default 50, so suites
- * that sign in a lot are not slowed); `signInLimits` sets any of the limiter's limits.
- */
 /** The demo's developer pages over this app's fakes, as startup/demo.ts builds them. */
 function devPages(mail: MailFake, sms?: SmsFake): Router {
   const router = Router();
@@ -79,14 +78,21 @@ function devPages(mail: MailFake, sms?: SmsFake): Router {
   return router;
 }
 
+/**
+ * `signInLimit`: failed sign-ins per account before its password sign-in pauses (default 50, so suites
+ * that sign in a lot are not slowed); `signInLimits` sets any of the limiter's limits. Several instances
+ * of the API on one database: pass the first one's `database` (then only its owner drops it) and, to put
+ * a pooler in between, `connectTo` (the app role's URL through it).
+ */
 export async function buildTestApp(
-  opts: { signInLimit?: number; signInLimits?: Partial<SignInLimits>; sms?: boolean } = {},
+  opts: { signInLimit?: number; signInLimits?: Partial<SignInLimits>; sms?: boolean; database?: TestDatabase; connectTo?: string } = {},
 ): Promise<TestApp> {
-  const db = await freshDatabase();
+  const db = opts.database ?? (await freshDatabase());
+  const appDb = opts.connectTo ? createDb(opts.connectTo, { max: 4 }) : db.app;
   const mail = await startMailFake();
   const sms = opts.sms ? await startTestSms() : undefined;
   const app = createApp({
-    db: db.app,
+    db: appDb,
     mailer: createMailer({ fakePort: mail.port, from: 'Bumperline test <test@bumperline.example>' }),
     logger: pino({ level: 'silent' }),
     authSecret: 'test-secret-that-is-at-least-32-characters-long',
@@ -94,12 +100,13 @@ export async function buildTestApp(
     photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
     appOrigin: ORIGIN,
     devPages: devPages(mail, sms?.sms.fake),
-    signInLimiter: new SignInLimiter(postgresCounter(db.app), { perAccount: opts.signInLimit ?? 50, ...opts.signInLimits }),
+    signInLimiter: new SignInLimiter(postgresCounter(appDb), { perAccount: opts.signInLimit ?? 50, ...opts.signInLimits }),
   });
   sms?.server.on('request', app);
   return {
     app,
     db,
+    appDb,
     mail,
     ...(sms ? { sms: sms.sms } : {}),
     async close() {
@@ -111,7 +118,8 @@ export async function buildTestApp(
         });
       }
       await mail.stop();
-      await db.drop();
+      if (appDb !== db.app) await appDb.$client.end();
+      if (!opts.database) await db.drop();
     },
   };
 }

@@ -3,6 +3,7 @@
 import type { TestProject } from 'vitest/node';
 import { startCluster, type Cluster } from '@bumperline/db/lifecycle/cluster';
 import { dropDatabase, provisionDatabase } from '@bumperline/db/lifecycle/provision';
+import { ensurePgbouncerInstalled } from '@bumperline/db/lifecycle/pgbouncer';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -16,6 +17,12 @@ let adminUrl = '';
 const templateDatabase = `bumperline_template_${process.pid}`;
 
 export async function setup(project: TestProject): Promise<void> {
+  // The scale-out suite (tests/api/pgbouncer.test.ts) runs PgBouncer: installed here, outside any test's time limit.
+  try {
+    ensurePgbouncerInstalled();
+  } catch {
+    // Not root: that suite fails with the package to install, the others run.
+  }
   if (process.env.DATABASE_URL) {
     adminUrl = process.env.DATABASE_URL;
   } else {

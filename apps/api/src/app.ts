@@ -9,6 +9,7 @@ import { ExpressAuth } from '@auth/express';
 import type { Db } from '@bumperline/db/client';
 import { InvalidCursorError } from '@bumperline/db/errors';
 import { buildAuthConfig } from './auth/auth-config.ts';
+import { sessionCookieReader } from './auth/session-cookie.ts';
 import { loadActor } from './auth/load-actor.ts';
 import { SignInLimiter } from './auth/sign-in-limiter.ts';
 import { AccountMailLimiter } from './auth/account-mail-limiter.ts';
@@ -74,12 +75,8 @@ export function createApp(deps: AppDeps): Express {
   );
 
   const signInLimiter = deps.signInLimiter ?? new SignInLimiter(postgresCounter(deps.db));
-  const authConfig = buildAuthConfig({
-    db: deps.db,
-    secret: deps.authSecret,
-    secureCookies: deps.appOrigin.startsWith('https:'),
-    limiter: signInLimiter,
-  });
+  const secureCookies = deps.appOrigin.startsWith('https:');
+  const authConfig = buildAuthConfig({ db: deps.db, secret: deps.authSecret, secureCookies, limiter: signInLimiter });
   // Auth.js reads the client address from this header for rate limiting; never trust the client's own.
   app.use('/auth', (req, _res, next) => {
     req.headers['x-bumperline-client-ip'] = req.ip ?? 'unknown';
@@ -94,7 +91,7 @@ export function createApp(deps: AppDeps): Express {
 
   app.use(express.json({ limit: '100kb' }));
   app.use(refuseNulBytes);
-  app.use(loadActor(deps.db, authConfig));
+  app.use(loadActor(deps.db, sessionCookieReader({ secret: deps.authSecret, secureCookies })));
 
   const scoped = makeScoped(deps.db);
   const api = express.Router();

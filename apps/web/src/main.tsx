@@ -1,9 +1,8 @@
 import { StrictMode } from 'react';
 import { createRoot } from 'react-dom/client';
-import '@fontsource/nunito-sans/400.css';
-import '@fontsource/nunito-sans/600.css';
-import '@fontsource/nunito-sans/700.css';
-import '@fontsource/nunito-sans/800.css';
+// One variable font file (weight axis only) carries every weight the screens use; index.html preloads its
+// Latin part, the one the first screen needs.
+import '@fontsource-variable/nunito-sans/wght.css';
 import './styles.css';
 import { App } from './app/app.tsx';
 

@@ -45,14 +45,9 @@ export type SignUpAnswered = z.infer<typeof signUpAnswered>;
 export const mailSentIfKnown = z.strictObject({ status: z.literal('sent-if-known') });
 export type MailSentIfKnown = z.infer<typeof mailSentIfKnown>;
 
-/**
- * Why a password sign-in was refused, beyond a wrong e-mail or password (Auth.js's `credentials`); the
- * code comes back in the failed sign-in's url. `unverified` is only said to someone who gave the right
- * password; the other two depend on counts kept per e-mail and per network address, never on whether
- * the account exists.
- */
-export const signInRefusals = ['unverified', 'account-paused', 'too-many-attempts'] as const;
-export type SignInRefusal = (typeof signInRefusals)[number];
+// Re-exported beside the other sign-in shapes; the web app imports sign-in-refusals.ts, which has no zod.
+export { signInRefusals } from './sign-in-refusals.ts';
+export type { SignInRefusal } from './sign-in-refusals.ts';
 
 export const switchCompanyInput = z.strictObject({ tenantId: uuid });
 

@@ -1,23 +1,11 @@
 import { z } from 'zod';
 import { isoDate, isoDateTime, listQueryBase, pageOf, requiredText, rowVersion, shortText, uuid } from './common.ts';
+import { gameKinds, gameStatuses } from './game-vocabulary.ts';
 
-export const gameKinds = ['pinball', 'video', 'jukebox', 'darts', 'other'] as const;
-export const gameKindLabels: Record<(typeof gameKinds)[number], string> = {
-  pinball: 'Pinball',
-  video: 'Video / arcade',
-  jukebox: 'Jukebox',
-  darts: 'Darts',
-  other: 'Other',
-};
-// Our own status words; each is shown with a word and an icon, never colour alone.
-export const gameStatuses = ['running', 'attention', 'down', 'in_shop'] as const;
-export type GameStatus = (typeof gameStatuses)[number];
-export const gameStatusLabels: Record<GameStatus, string> = {
-  running: 'Running',
-  attention: 'Needs attention',
-  down: 'Down',
-  in_shop: 'At the shop',
-};
+// Re-exported so that server code finds the whole contract of a game here; web code imports game-vocabulary.ts,
+// which does not pull zod into the screens' bundles.
+export { gameKindLabels, gameKinds, gameStatusLabels, gameStatuses } from './game-vocabulary.ts';
+export type { GameStatus } from './game-vocabulary.ts';
 
 export const gameModelInput = z.strictObject({
   maker: requiredText(100),

@@ -9,14 +9,12 @@ const minutes = z
   .min(5, { error: 'must be at least 5 minutes' })
   .max(60 * 24 * 30);
 
+/** The longest warning lead a company may choose: the warnings job looks no further ahead than this. */
+export const longestWarningLeadMinutes = 24 * 60;
+
 export const settingsUpdate = z.strictObject({
   responseTargets: z.strictObject({ down: minutes, fault: minutes, cosmetic: minutes }).optional(),
-  warnBeforeMinutes: z
-    .number()
-    .int()
-    .min(0)
-    .max(24 * 60)
-    .optional(),
+  warnBeforeMinutes: z.number().int().min(0).max(longestWarningLeadMinutes).optional(),
   mapTileUrl: z
     .union([
       z.literal(''),

@@ -1,4 +1,5 @@
-// The outbox worker: sends the SMS and e-mail that changes wrote to the outbox table, company by company.
+// The outbox worker: sends the SMS and e-mail that changes wrote to the outbox table, company by company —
+// only the companies one query across companies finds with rows to claim, so an idle company costs nothing.
 // Rows are claimed in a short transaction and sent after it commits (a provider is never called while a
 // transaction holds a connection), then marked sent, retried with exponential backoff, given up as
 // failed, or blocked for numbers that opted out. Never lost: a row left 'sending' by a process that died
@@ -6,7 +7,7 @@
 // message list is checked for it.
 import type { Logger } from 'pino';
 import { withScope, type Db, type Tx } from '@bumperline/db/client';
-import { listTenantIds } from '@bumperline/db/queries/companies';
+import { listCompaniesWithDueMessages } from '@bumperline/db/queries/due-work';
 import {
   claimDueMessages,
   findMessagesByProviderId,
@@ -58,8 +59,9 @@ type Outcome =
 
 export async function runOutboxOnce(deps: OutboxDeps, now: Date = new Date()): Promise<OutboxRunSummary> {
   const summary: OutboxRunSummary = { sent: 0, retried: 0, failed: 0, blocked: 0, recovered: 0 };
-  for (const tenantId of await listTenantIds(deps.db)) {
-    const rows = await withScope(deps.db, { tenantId }, (tx) => claimDue(tx, deps, now));
+  const stuckBefore = new Date(now.getTime() - (deps.stuckAfterMs ?? DEFAULT_STUCK_AFTER_MS));
+  for (const tenantId of await listCompaniesWithDueMessages(deps.db, { now, stuckBefore })) {
+    const rows = await withScope(deps.db, { tenantId }, (tx) => claimDueMessages(tx, { now, stuckBefore, limit: deps.batchSize ?? 50 }));
     for (const row of rows) {
       const outcome = await deliver(deps, row);
       await withScope(deps.db, { tenantId }, (tx) => record(tx, row, outcome, now));
@@ -74,12 +76,6 @@ export async function runOutboxOnce(deps: OutboxDeps, now: Date = new Date()): P
     }
   }
   return summary;
-}
-
-/** Due rows and rows stuck in 'sending' (claimed SKIP LOCKED, so concurrent workers take different rows). */
-async function claimDue(tx: Tx, deps: OutboxDeps, now: Date): Promise<Claimed[]> {
-  const stuckBefore = new Date(now.getTime() - (deps.stuckAfterMs ?? DEFAULT_STUCK_AFTER_MS));
-  return claimDueMessages(tx, { now, stuckBefore, limit: deps.batchSize ?? 50 });
 }
 
 /** Sends one claimed row, outside any transaction. */

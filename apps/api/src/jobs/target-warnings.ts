@@ -5,11 +5,12 @@ import type { Logger } from 'pino';
 import { withScope, type Db, type Tx } from '@bumperline/db/client';
 import { getCall, lockCallsToWarn, markCallWarned } from '@bumperline/db/queries/calls';
 import { insertEvent } from '@bumperline/db/queries/call-events';
-import { listTenantIds } from '@bumperline/db/queries/companies';
+import { listCompaniesWithCallsToWarn } from '@bumperline/db/queries/due-work';
 import { enqueueMessage } from '@bumperline/db/queries/outbox';
 import { getSettings } from '@bumperline/db/queries/settings';
 import { listMemberPhones } from '@bumperline/db/queries/team';
 import { callStateGroups } from '@bumperline/contracts/calls';
+import { longestWarningLeadMinutes } from '@bumperline/contracts/settings';
 import { dispatcherWarningSms } from '../services/call-messages.ts';
 import { appLink } from '../services/links.ts';
 
@@ -19,10 +20,10 @@ export interface TargetWarningDeps {
   logger?: Logger;
 }
 
-/** Runs once over every company; returns how many calls were warned about. */
+/** Runs once over the companies with a call to warn about (one query finds them); returns how many calls were warned about. */
 export async function runTargetWarningsOnce(deps: TargetWarningDeps, now: Date = new Date()): Promise<number> {
   let warned = 0;
-  for (const tenantId of await listTenantIds(deps.db)) {
+  for (const tenantId of await listCompaniesWithCallsToWarn(deps.db, { now, longestLeadMinutes: longestWarningLeadMinutes })) {
     warned += await withScope(deps.db, { tenantId }, (tx) => warnCompany(tx, deps.appOrigin, now));
   }
   if (warned) deps.logger?.info({ warned }, 'response-target warnings queued');

@@ -19,6 +19,7 @@ import {
   findUserByEmail,
   findUserById,
   insertUserIfNew,
+  listCompaniesIn,
   listCompaniesOf,
   revokeAllSessionsOf,
   setActiveCompany,
@@ -127,10 +128,11 @@ export function accountRouter(deps: {
 
   r.get('/me', async (req, res) => {
     const actor = requireActor(req);
-    const companies = await listCompaniesOf(db, actor.userId);
-    const company = actor.tenantId
-      ? ((await withScope(db, { tenantId: actor.tenantId, userId: actor.userId }, (tx) => getCompanySummary(tx, actor.tenantId!))) ?? null)
-      : null;
+    // One transaction: the person's companies (their own memberships) and the active one's summary.
+    const { companies, company } = await withScope(db, { tenantId: actor.tenantId, userId: actor.userId }, async (tx) => ({
+      companies: await listCompaniesIn(tx, actor.userId),
+      company: actor.tenantId ? ((await getCompanySummary(tx, actor.tenantId)) ?? null) : null,
+    }));
     const me: Me = {
       user: { id: actor.userId, email: actor.email, name: actor.name },
       company,

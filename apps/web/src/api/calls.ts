@@ -31,7 +31,7 @@ export const callQuery = (id: string) =>
 export const rankedTechniciansQuery = (id: string) =>
   queryOptions({ queryKey: callKeys.technicians(id), queryFn: () => get<RankedTechnicianList>(`/api/calls/${id}/technicians`) });
 
-export const useCalls = (q: CallListQuery) => useQuery(callListQuery(q));
+export const useCalls = (q: CallListQuery, enabled = true) => useQuery({ ...callListQuery(q), enabled });
 export const useCall = (id: string) => useQuery(callQuery(id));
 export const useRankedTechnicians = (id: string, enabled: boolean) => useQuery({ ...rankedTechniciansQuery(id), enabled });
 /** The company's technicians (for dispatchers: the technician filter). */

@@ -8,6 +8,7 @@ export const meQuery = () =>
     queryKey: ['me'],
     queryFn: async (): Promise<Me | null> => {
       try {
+        // index.html preloads this request while the scripts download; the browser hands its answer over here.
         return await get<Me>('/api/account/me');
       } catch (err) {
         if (err instanceof ApiError && err.status === 401) return null;

@@ -1,17 +1,12 @@
-import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
+import { QueryClientProvider } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router-dom';
-import { ApiError } from '../lib/api-client.ts';
+import { meQuery } from '../api/me.ts';
+import { queryClient } from './query-client.ts';
 import { router } from './router.tsx';
 
-const queryClient = new QueryClient({
-  defaultOptions: {
-    queries: {
-      // Client errors will not fix themselves by retrying.
-      retry: (count, err) => !(err instanceof ApiError && err.status >= 400 && err.status < 500) && count < 2,
-      refetchOnWindowFocus: true,
-    },
-  },
-});
+// index.html preloads /me. Asking for it at start on every screen uses that answer now, never later: a page
+// that signs someone in must not be handed the answer from before.
+void queryClient.prefetchQuery(meQuery());
 
 export function App() {
   return (

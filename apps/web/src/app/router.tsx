@@ -6,19 +6,29 @@ import { AppShell } from './app-shell.tsx';
 import { RequirePermission, RequireSignedIn } from './guards.tsx';
 import { useMe } from '../api/me.ts';
 import { Loading } from '../components/states.tsx';
-import { SignInPage } from '../features/auth/sign-in-page.tsx';
-import { SignUpPage } from '../features/auth/sign-up-page.tsx';
-import { RequestLinkPage, ResetPasswordPage } from '../features/auth/password-pages.tsx';
-import { LinkSignInPage } from '../features/auth/link-sign-in-page.tsx';
-import { InvitationPage } from '../features/auth/invitation-page.tsx';
-import { VerifyEmailPage } from '../features/auth/verify-email-page.tsx';
-import { StartPage } from './start-page.tsx';
+import { prefetchStartPage, StartPage } from './start-page.tsx';
 import { LandingPage } from '../features/home/landing-page.tsx';
+import { prefetchCalls } from '../features/calls/calls-queries.ts';
 import { NotFoundPage } from './not-found-page.tsx';
 import { RouteError } from './route-error.tsx';
 import { lazyPage } from './lazy-page.tsx';
+import { prefetching } from './prefetch.ts';
 
-// Staff screens load on first visit; the sign-in and landing pages stay in the first bundle.
+// The first bundle holds the shell, the landing page and Today (the first screen of most people); every other
+// screen loads on first visit, so forms (zod, react-hook-form) and the map (Leaflet) come only with the screens
+// that use them.
+const SignInPage = lazyPage(() => import('../features/auth/sign-in-page.tsx').then((m) => m.SignInPage));
+const SignUpPage = lazyPage(() => import('../features/auth/sign-up-page.tsx').then((m) => m.SignUpPage));
+const SignInLinkPage = lazyPage(() =>
+  import('../features/auth/password-pages.tsx').then((m) => () => <m.RequestLinkPage kind="sign-in-link" />),
+);
+const ForgotPasswordPage = lazyPage(() =>
+  import('../features/auth/password-pages.tsx').then((m) => () => <m.RequestLinkPage kind="password-reset" />),
+);
+const ResetPasswordPage = lazyPage(() => import('../features/auth/password-pages.tsx').then((m) => m.ResetPasswordPage));
+const LinkSignInPage = lazyPage(() => import('../features/auth/link-sign-in-page.tsx').then((m) => m.LinkSignInPage));
+const InvitationPage = lazyPage(() => import('../features/auth/invitation-page.tsx').then((m) => m.InvitationPage));
+const VerifyEmailPage = lazyPage(() => import('../features/auth/verify-email-page.tsx').then((m) => m.VerifyEmailPage));
 const CallsPage = lazyPage(() => import('../features/calls/calls-page.tsx').then((m) => m.CallsPage));
 const CallPage = lazyPage(() => import('../features/calls/call-page.tsx').then((m) => m.CallPage));
 const SettingsPage = lazyPage(() => import('../features/settings/settings-page.tsx').then((m) => m.SettingsPage));
@@ -49,12 +59,13 @@ export const router = createBrowserRouter([
   {
     errorElement: <RouteError />,
     children: [
-      { path: paths.home, element: <Root /> },
+      // A signed-in visitor at / goes on to Today: its data starts beside /me.
+      { path: paths.home, element: <Root />, loader: prefetching(prefetchStartPage) },
       { path: paths.signIn, element: <SignInPage /> },
       { path: paths.signUp, element: <SignUpPage /> },
-      { path: paths.signInLink, element: <RequestLinkPage kind="sign-in-link" /> },
+      { path: paths.signInLink, element: <SignInLinkPage /> },
       { path: paths.signInLinkOpen, element: <LinkSignInPage /> },
-      { path: paths.forgotPassword, element: <RequestLinkPage kind="password-reset" /> },
+      { path: paths.forgotPassword, element: <ForgotPasswordPage /> },
       { path: paths.resetPassword, element: <ResetPasswordPage /> },
       { path: paths.verifyEmail, element: <VerifyEmailPage /> },
       { path: paths.invitation, element: <InvitationPage /> },
@@ -65,7 +76,7 @@ export const router = createBrowserRouter([
           </RequireSignedIn>
         ),
         children: [
-          { path: paths.today, element: <StartPage /> },
+          { path: paths.today, element: <StartPage />, loader: prefetching(prefetchStartPage) },
           {
             path: paths.venues,
             element: guard('venues:read', <VenuesPage />),
@@ -101,6 +112,7 @@ export const router = createBrowserRouter([
           {
             path: paths.calls,
             element: guard('calls:read', <CallsPage />),
+            loader: prefetching(prefetchCalls, CallsPage.preload),
           },
           {
             path: '/calls/:id',

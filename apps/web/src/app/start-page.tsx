@@ -1,8 +1,12 @@
 // The first screen after sign-in depends on the role: venue contacts get their venue view.
+import { can } from '@bumperline/contracts/roles';
 import { useMe } from '../api/me.ts';
+import { venueViewQuery } from '../api/venue-view.ts';
 import { Loading } from '../components/states.tsx';
 import { HomePage } from '../features/home/home-page.tsx';
+import { prefetchToday } from '../features/home/today-queries.ts';
 import { lazyPage } from './lazy-page.tsx';
+import type { ScreenPrefetch } from './prefetch.ts';
 
 const VenueViewPage = lazyPage(() => import('../features/venue-view/venue-view-page.tsx').then((m) => m.VenueViewPage));
 
@@ -11,3 +15,13 @@ export function StartPage() {
   if (me.isLoading) return <Loading />;
   return me.data?.role === 'venue_contact' ? <VenueViewPage /> : <HomePage />;
 }
+
+/** What StartPage will show for this role, started at navigation. */
+export const prefetchStartPage: ScreenPrefetch = (ahead, role) => {
+  if (role === 'venue_contact') {
+    void VenueViewPage.preload();
+    ahead(venueViewQuery());
+  } else if (can(role, 'games:read')) {
+    prefetchToday(ahead, role);
+  }
+};

@@ -1,6 +1,6 @@
 // A call's state as a word with an icon; colour only supports the word.
 import { CircleCheck, CircleDashed, Clock, Hammer, Package, Truck, UserCheck, Wrench, XCircle } from 'lucide-react';
-import { callStateLabels, type CallState } from '@bumperline/contracts/calls';
+import { callStateLabels, type CallState } from '@bumperline/contracts/call-vocabulary';
 
 const look: Record<CallState, { className: string; Icon: typeof Clock }> = {
   reported: { className: 'bg-down-tint text-down', Icon: CircleDashed },

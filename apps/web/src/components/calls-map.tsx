@@ -7,7 +7,7 @@ import L from 'leaflet';
 import { MapContainer, Marker, Popup, TileLayer } from 'react-leaflet';
 import MarkerClusterGroup from 'react-leaflet-cluster';
 import { Link } from 'react-router-dom';
-import { callStateLabels, type CallState } from '@bumperline/contracts/calls';
+import { callStateLabels, type CallState } from '@bumperline/contracts/call-vocabulary';
 
 export interface MapPoint {
   id: string;

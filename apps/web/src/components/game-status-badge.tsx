@@ -1,6 +1,6 @@
 // A game's status: always a word and an icon beside the colour, never colour alone.
 import { CircleCheck, TriangleAlert, OctagonX, Wrench } from 'lucide-react';
-import { gameStatusLabels, type GameStatus } from '@bumperline/contracts/games';
+import { gameStatusLabels, type GameStatus } from '@bumperline/contracts/game-vocabulary';
 
 const styles: Record<GameStatus, { className: string; Icon: typeof CircleCheck }> = {
   running: { className: 'bg-running-tint text-running', Icon: CircleCheck },

@@ -11,19 +11,26 @@ export interface ListParams<S extends string> {
   trail: string[];
 }
 
-export function useListParams<S extends string>(defaultSort: S, extraKeys: string[] = []) {
+/** A list's parameters as the address bar holds them (also read by route loaders, before the screen renders). */
+export function readListParams<S extends string>(sp: URLSearchParams, defaultSort: S): ListParams<S> {
+  return {
+    q: sp.get('q') ?? '',
+    sort: (sp.get('sort') as S | null) ?? defaultSort,
+    order: sp.get('order') === 'desc' ? 'desc' : 'asc',
+    cursor: sp.get('cursor') ?? undefined,
+    trail: sp.get('trail') ? sp.get('trail')!.split(',') : [],
+  };
+}
+
+/** A screen's own filters from the address bar ('' when absent). */
+export function readListExtras(sp: URLSearchParams, extraKeys: readonly string[]): Record<string, string> {
+  return Object.fromEntries(extraKeys.map((k) => [k, sp.get(k) ?? '']));
+}
+
+export function useListParams<S extends string>(defaultSort: S, extraKeys: readonly string[] = []) {
   const [sp, setSp] = useSearchParams();
-  const params: ListParams<S> = useMemo(
-    () => ({
-      q: sp.get('q') ?? '',
-      sort: (sp.get('sort') as S | null) ?? defaultSort,
-      order: sp.get('order') === 'desc' ? 'desc' : 'asc',
-      cursor: sp.get('cursor') ?? undefined,
-      trail: sp.get('trail') ? sp.get('trail')!.split(',') : [],
-    }),
-    [sp, defaultSort],
-  );
-  const extras = useMemo(() => Object.fromEntries(extraKeys.map((k) => [k, sp.get(k) ?? ''])), [sp, extraKeys]);
+  const params = useMemo(() => readListParams(sp, defaultSort), [sp, defaultSort]);
+  const extras = useMemo(() => readListExtras(sp, extraKeys), [sp, extraKeys]);
 
   const update = useCallback(
     (changes: Record<string, string | undefined>, resetPage = true) => {

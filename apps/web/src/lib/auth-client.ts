@@ -1,5 +1,5 @@
 // Signing in and out goes through Auth.js's own endpoints (/auth/...), which want its CSRF token.
-import { signInRefusals, type SignInRefusal } from '@bumperline/contracts/auth';
+import { signInRefusals, type SignInRefusal } from '@bumperline/contracts/sign-in-refusals';
 
 async function csrfToken(): Promise<string> {
   const res = await fetch('/auth/csrf', { credentials: 'same-origin' });

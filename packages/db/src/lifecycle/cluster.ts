@@ -6,6 +6,7 @@ import { chmodSync, chownSync, existsSync, mkdirSync, readFileSync, readdirSync,
 import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+import { fileURLToPath } from 'node:url';
 
 export interface Cluster {
   /** Superuser URL on 127.0.0.1 — only for creating roles and databases. */
@@ -13,7 +14,10 @@ export interface Cluster {
   stop(): void;
 }
 
-const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
+export const isRoot = typeof process.getuid === 'function' && process.getuid() === 0;
+// The checkout's root, not the working directory: npm runs each workspace's scripts in its own folder,
+// and `npm start`, `npm run db:migrate` and `npm run seed:scale` must all find the same cluster.
+const checkoutRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '../../../..');
 
 /** Finds Debian's server binaries (/usr/lib/postgresql/<major>/bin), newest major first. */
 export function findServerBin(): string | undefined {
@@ -25,17 +29,20 @@ export function findServerBin(): string | undefined {
   return majors[0] ? path.join(base, majors[0], 'bin') : undefined;
 }
 
+/** Installs a Debian package with apt-get when we are root; otherwise says how to install it. */
+export function installDebianPackage(pkg: string, what: string, log: (msg: string) => void = console.log): void {
+  if (!isRoot) throw new Error(`${what} is not installed. Install the Debian package: sudo apt-get install ${pkg}`);
+  log(`${what} not found: installing the Debian package "${pkg}" with apt-get…`);
+  const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
+  execFileSync('apt-get', ['update', '-qq'], { stdio: 'inherit', env });
+  execFileSync('apt-get', ['install', '-y', '-qq', pkg], { stdio: 'inherit', env });
+}
+
 /** Installs the server with apt when missing and we are root; otherwise says which package to install. */
 export function ensureServerInstalled(log: (msg: string) => void = console.log): string {
   let bin = findServerBin();
   if (bin) return bin;
-  if (!isRoot) {
-    throw new Error('PostgreSQL server is not installed. Install the Debian package: sudo apt-get install postgresql');
-  }
-  log('PostgreSQL server not found: installing the Debian package "postgresql" with apt-get…');
-  const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
-  execFileSync('apt-get', ['update', '-qq'], { stdio: 'inherit', env });
-  execFileSync('apt-get', ['install', '-y', '-qq', 'postgresql'], { stdio: 'inherit', env });
+  installDebianPackage('postgresql', 'PostgreSQL server', log);
   bin = findServerBin();
   if (!bin) throw new Error('apt-get installed "postgresql" but no server binary was found under /usr/lib/postgresql');
   return bin;
@@ -62,7 +69,8 @@ function asServerUser(cmd: string, args: string[]): { status: number | null; std
   return { status: r.status, stderr: r.stderr ?? '', stdout: r.stdout ?? '' };
 }
 
-function prepareDir(dir: string): void {
+/** A folder only the server user (`postgres` when we are root) may enter. */
+export function prepareDir(dir: string): void {
   mkdirSync(dir, { recursive: true, mode: 0o700 });
   if (isRoot) {
     const uid = Number(execFileSync('id', ['-u', 'postgres'], { encoding: 'utf8' }).trim());
@@ -73,7 +81,7 @@ function prepareDir(dir: string): void {
 }
 
 /** True while a process with this id runs (signal 0 only checks). */
-function processAlive(pid: number): boolean {
+export function processAlive(pid: number): boolean {
   try {
     process.kill(pid, 0);
     return true;
@@ -109,7 +117,7 @@ export interface StartOptions {
 export async function startCluster(opts: StartOptions): Promise<Cluster> {
   const log = opts.log ?? console.log;
   const bin = ensureServerInstalled(log);
-  const key = createHash('sha256').update(process.cwd()).digest('hex').slice(0, 12);
+  const key = createHash('sha256').update(checkoutRoot).digest('hex').slice(0, 12);
   if (opts.mode === 'ephemeral') removeOrphanedClusters(bin);
   const root =
     opts.mode === 'persistent'

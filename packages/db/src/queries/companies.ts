@@ -1,14 +1,8 @@
-// Operator companies (tenants): the current company's own row, a new company at sign-up, and the list
-// of every company that scheduled jobs visit one by one.
-import { eq, sql } from 'drizzle-orm';
-import type { Db, Tx } from '../client.ts';
+// Operator companies (tenants): the current company's own row and a new company at sign-up. (Scheduled jobs
+// find the companies with due work through due-work.ts.)
+import { eq } from 'drizzle-orm';
+import type { Tx } from '../client.ts';
 import { memberships, tenants } from '../schema/index.ts';
-
-/** Every company's id, through a narrow SECURITY DEFINER function (drizzle/0003_…): for jobs, which then work inside each company's scope. */
-export async function listTenantIds(db: Db): Promise<string[]> {
-  const r = await db.execute<{ tenant_id: string }>(sql`select tenant_id from list_tenant_ids()`);
-  return r.rows.map((row) => row.tenant_id);
-}
 
 /** A new company with its first owner; run in the new company's scope. */
 export async function createCompany(

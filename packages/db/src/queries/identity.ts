@@ -2,7 +2,7 @@
 import { and, eq, isNull, sql } from 'drizzle-orm';
 import type { Db, Tx } from '../client.ts';
 import { withScope } from '../client.ts';
-import { memberships, platformAdmins, tenants, userSessions, users } from '../schema/index.ts';
+import { memberships, tenants, userSessions, users } from '../schema/index.ts';
 
 export async function findUserByEmail(db: Db | Tx, email: string) {
   const [u] = await db
@@ -59,25 +59,56 @@ export async function revokeAllSessionsOf(db: Db | Tx, userId: string): Promise<
 
 /** The companies a person belongs to, read under their own user scope (RLS lets them see their memberships). */
 export async function listCompaniesOf(db: Db, userId: string) {
-  return withScope(db, { userId }, (tx) =>
-    tx
-      .select({ id: tenants.id, name: tenants.name, role: memberships.role })
-      .from(memberships)
-      .innerJoin(tenants, eq(tenants.id, memberships.tenantId))
-      .where(eq(memberships.userId, userId))
-      .orderBy(tenants.name),
-  );
+  return withScope(db, { userId }, (tx) => listCompaniesIn(tx, userId));
 }
 
-/** A live session and the person behind it, or undefined when revoked or unknown. */
-export async function loadSession(db: Db, sessionId: string) {
-  const [row] = await db
-    .select({ session: userSessions, user: users, adminActive: platformAdmins.active })
-    .from(userSessions)
-    .innerJoin(users, eq(users.id, userSessions.userId))
-    .leftJoin(platformAdmins, eq(platformAdmins.userId, users.id))
-    .where(and(eq(userSessions.id, sessionId), isNull(userSessions.revokedAt)));
-  return row;
+/** The same, inside a transaction whose scope already names the person (app.user_id). */
+export async function listCompaniesIn(tx: Tx, userId: string) {
+  return tx
+    .select({ id: tenants.id, name: tenants.name, role: memberships.role })
+    .from(memberships)
+    .innerJoin(tenants, eq(tenants.id, memberships.tenantId))
+    .where(eq(memberships.userId, userId))
+    .orderBy(tenants.name);
+}
+
+export interface SessionActor {
+  sessionId: string;
+  userId: string;
+  email: string;
+  name: string;
+  /** The company the session works in: the one it chose while still a member, else the first by name. */
+  tenantId: string | null;
+  role: (typeof memberships.$inferSelect)['role'] | null;
+  isPlatformAdmin: boolean;
+}
+
+/**
+ * A live session with its person, company and role, in one statement (the SECURITY DEFINER function
+ * session_actor, drizzle/0007_…); undefined when the session is revoked or unknown.
+ */
+export async function loadSessionActor(db: Db, sessionId: string): Promise<SessionActor | undefined> {
+  const r = await db.execute<{
+    session_id: string;
+    user_id: string;
+    email: string;
+    name: string;
+    tenant_id: string | null;
+    role: SessionActor['role'];
+    is_platform_admin: boolean;
+  }>(sql`select * from session_actor(${sessionId}::uuid)`);
+  const row = r.rows[0];
+  return (
+    row && {
+      sessionId: row.session_id,
+      userId: row.user_id,
+      email: row.email,
+      name: row.name,
+      tenantId: row.tenant_id,
+      role: row.role,
+      isPlatformAdmin: row.is_platform_admin,
+    }
+  );
 }
 
 export async function setActiveCompany(db: Db, sessionId: string, tenantId: string | null): Promise<void> {

@@ -19,7 +19,7 @@ export async function listTechnicians(tx: Tx) {
       skills: sql<string[]>`coalesce(${technicianProfiles.skills}, '{}'::text[])`,
       homeLatitude: technicianProfiles.homeLatitude,
       homeLongitude: technicianProfiles.homeLongitude,
-      openCalls: sql<number>`(select count(*)::int from service_calls c where c.tenant_id = "memberships"."tenant_id" and c.technician_id = "users"."id" and c.state = any(${technicianLoadStates}::call_state[]))`,
+      openCalls: sql<number>`(select count(*)::int from service_calls c where c.tenant_id = "memberships"."tenant_id" and c.technician_id = "users"."id" and c.state = any(${technicianLoadStates}::text[]))`,
     })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))

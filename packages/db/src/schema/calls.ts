@@ -1,4 +1,6 @@
 // Service calls and what hangs off them: their timeline, photos, and the game's downtime they cause.
+import { sql } from 'drizzle-orm';
+import { callStateGroups } from '@bumperline/contracts/calls';
 import { boolean, foreignKey, index, integer, jsonb, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { callSeverity, callSource, callState, problemKind } from './enums.ts';
 import { users } from './identity.ts';
@@ -12,10 +14,10 @@ export const serviceCalls = tenantTable(
     id: uuid('id').notNull().defaultRandom(),
     gameId: uuid('game_id').notNull(),
     venueId: uuid('venue_id'),
-    problem: problemKind('problem').notNull(),
-    severity: callSeverity('severity').notNull(),
-    state: callState('state').notNull().default('reported'),
-    source: callSource('source').notNull(),
+    problem: problemKind.column('problem').notNull(),
+    severity: callSeverity.column('severity').notNull(),
+    state: callState.column('state').notNull().default('reported'),
+    source: callSource.column('source').notNull(),
     note: text('note').notNull().default(''),
     reporterPhone: text('reporter_phone'),
     reporterSmsConsent: boolean('reporter_sms_consent').notNull().default(false),
@@ -37,7 +39,19 @@ export const serviceCalls = tenantTable(
     foreignKey({ columns: [t.tenantId, t.gameId], foreignColumns: [games.tenantId, games.id] }),
     foreignKey({ columns: [t.tenantId, t.venueId], foreignColumns: [venues.tenantId, venues.id] }),
     uniqueIndex('service_calls_status_token_key').on(t.statusToken),
-    index('service_calls_tenant_state_idx').on(t.tenantId, t.state, t.targetAt),
+    callState.check('service_calls_state_check', t.state),
+    problemKind.check('service_calls_problem_check', t.problem),
+    callSeverity.check('service_calls_severity_check', t.severity),
+    callSource.check('service_calls_source_check', t.source),
+    // One state (a filter, the warnings job, a game's unfixed calls), in target order.
+    index('service_calls_tenant_state_idx').on(t.tenantId, t.state, t.targetAt, t.id),
+    // The open list (Today, Calls): few rows of many, already in the order the list shows.
+    index('service_calls_tenant_open_target_idx')
+      .on(t.tenantId, t.targetAt, t.id)
+      .where(sql.raw(`state in (${callStateGroups.open.map((s) => `'${s}'`).join(', ')})`)),
+    // Every state, newest or by target first.
+    index('service_calls_tenant_opened_idx').on(t.tenantId, t.openedAt, t.id),
+    index('service_calls_tenant_target_idx').on(t.tenantId, t.targetAt, t.id),
     index('service_calls_tenant_game_idx').on(t.tenantId, t.gameId, t.openedAt),
     index('service_calls_tenant_tech_idx').on(t.tenantId, t.technicianId, t.state),
   ],
@@ -56,12 +70,14 @@ export const callEvents = tenantTable(
     kind: text('kind', {
       enum: ['opened', 'state', 'assigned', 'unassigned', 'accepted', 'declined', 'note', 'report_joined', 'sms_in', 'photo', 'warned'],
     }).notNull(),
-    fromState: callState('from_state'),
-    toState: callState('to_state'),
+    fromState: callState.column('from_state'),
+    toState: callState.column('to_state'),
     detail: jsonb('detail').$type<Record<string, unknown>>().notNull().default({}),
   },
   (t) => [
     foreignKey({ columns: [t.tenantId, t.callId], foreignColumns: [serviceCalls.tenantId, serviceCalls.id] }).onDelete('cascade'),
+    callState.check('call_events_from_state_check', t.fromState),
+    callState.check('call_events_to_state_check', t.toState),
     index('call_events_tenant_call_idx').on(t.tenantId, t.callId, t.at),
   ],
 );

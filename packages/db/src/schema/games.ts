@@ -11,11 +11,14 @@ export const gameModels = tenantTable(
     id: uuid('id').notNull().defaultRandom(),
     maker: text('maker').notNull(),
     title: text('title').notNull(),
-    kind: gameKind('kind').notNull(),
+    kind: gameKind.column('kind').notNull(),
     year: integer('year'),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
-  (t) => [uniqueIndex('game_models_tenant_maker_title_key').on(t.tenantId, t.maker, t.title)],
+  (t) => [
+    gameKind.check('game_models_kind_check', t.kind),
+    uniqueIndex('game_models_tenant_maker_title_key').on(t.tenantId, t.maker, t.title),
+  ],
 );
 
 export const games = tenantTable(
@@ -25,7 +28,7 @@ export const games = tenantTable(
     modelId: uuid('model_id').notNull(),
     venueId: uuid('venue_id'),
     serial: text('serial').notNull(),
-    status: gameStatus('status').notNull().default('running'),
+    status: gameStatus.column('status').notNull().default('running'),
     installedOn: date('installed_on'),
     pricePerPlayCents: integer('price_per_play_cents').notNull().default(100),
     // The game tag's secret: an unguessable token printed as a QR code on the cabinet.
@@ -41,7 +44,9 @@ export const games = tenantTable(
     foreignKey({ columns: [t.tenantId, t.venueId], foreignColumns: [venues.tenantId, venues.id] }),
     uniqueIndex('games_tag_token_key').on(t.tagToken),
     uniqueIndex('games_tenant_serial_key').on(t.tenantId, t.modelId, t.serial),
+    gameStatus.check('games_status_check', t.status),
     index('games_tenant_venue_idx').on(t.tenantId, t.venueId),
+    index('games_tenant_status_idx').on(t.tenantId, t.status),
     index('games_tenant_created_idx').on(t.tenantId, t.createdAt, t.id),
     index('games_tenant_serial_idx').on(t.tenantId, sql`lower(${t.serial})`),
   ],

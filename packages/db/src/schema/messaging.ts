@@ -11,12 +11,12 @@ export const outbox = tenantTable(
   'outbox',
   {
     id: uuid('id').notNull().defaultRandom(),
-    channel: outboxChannel('channel').notNull(),
+    channel: outboxChannel.column('channel').notNull(),
     toAddress: text('to_address').notNull(),
     subject: text('subject').notNull().default(''),
     body: text('body').notNull(),
     callId: uuid('call_id'),
-    status: outboxStatus('status').notNull().default('pending'),
+    status: outboxStatus.column('status').notNull().default('pending'),
     attempts: integer('attempts').notNull().default(0),
     nextAttemptAt: timestamp('next_attempt_at', { withTimezone: true }).notNull().defaultNow(),
     claimedAt: timestamp('claimed_at', { withTimezone: true }),
@@ -27,6 +27,8 @@ export const outbox = tenantTable(
     sentAt: timestamp('sent_at', { withTimezone: true }),
   },
   (t) => [
+    outboxChannel.check('outbox_channel_check', t.channel),
+    outboxStatus.check('outbox_status_check', t.status),
     index('outbox_tenant_due_idx').on(t.tenantId, t.status, t.nextAttemptAt),
     index('outbox_tenant_call_idx').on(t.tenantId, t.callId),
     index('outbox_provider_idx').on(t.providerId),

@@ -12,10 +12,11 @@ export const memberships = tenantTable(
     userId: uuid('user_id')
       .notNull()
       .references(() => users.id, { onDelete: 'cascade' }),
-    role: memberRole('role').notNull(),
+    role: memberRole.column('role').notNull(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [
+    memberRole.check('memberships_role_check', t.role),
     index('memberships_user_idx').on(t.userId),
     // A person may read their own memberships in every company (to list and switch companies).
     pgPolicy('own_memberships', { for: 'select', to: 'public', using: sql`${t.userId} = ${currentUser}` }),
@@ -28,7 +29,7 @@ export const invitations = tenantTable(
   {
     id: uuid('id').notNull().defaultRandom(),
     email: text('email').notNull(),
-    role: memberRole('role').notNull(),
+    role: memberRole.column('role').notNull(),
     tokenHash: text('token_hash').notNull(),
     invitedBy: uuid('invited_by').references(() => users.id, { onDelete: 'set null' }),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
@@ -36,5 +37,5 @@ export const invitations = tenantTable(
     acceptedAt: timestamp('accepted_at', { withTimezone: true }),
     revokedAt: timestamp('revoked_at', { withTimezone: true }),
   },
-  (t) => [uniqueIndex('invitations_token_key').on(t.tokenHash)],
+  (t) => [memberRole.check('invitations_role_check', t.role), uniqueIndex('invitations_token_key').on(t.tokenHash)],
 );

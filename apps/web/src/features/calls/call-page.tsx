@@ -3,6 +3,7 @@
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { Camera, MessageSquare, Send, UserMinus, UserPlus } from 'lucide-react';
+import type { CallDetail, CallEvent, ServiceCall } from '@bumperline/contracts/calls';
 import {
   callRef,
   callStateLabels,
@@ -11,12 +12,9 @@ import {
   severities,
   severityLabels,
   transitions,
-  type CallDetail,
-  type CallEvent,
   type CallState,
-  type ServiceCall,
   type Severity,
-} from '@bumperline/contracts/calls';
+} from '@bumperline/contracts/call-vocabulary';
 import { PageHeader } from '../../components/page-header.tsx';
 import { CallStateBadge } from '../../components/call-state-badge.tsx';
 import { TargetClock } from '../../components/target-clock.tsx';

@@ -1,6 +1,7 @@
 // Dispatch: open calls in a table and on a map side by side, with their age against the response target.
 import { Link } from 'react-router-dom';
-import { callRef, callStateLabels, callStates, problemKinds, problemLabels, type ServiceCall } from '@bumperline/contracts/calls';
+import type { ServiceCall } from '@bumperline/contracts/calls';
+import { callRef, callStateLabels, callStates, problemKinds, problemLabels } from '@bumperline/contracts/call-vocabulary';
 import { DataTable, type Column } from '../../components/data-table.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
 import { CallStateBadge } from '../../components/call-state-badge.tsx';
@@ -13,10 +14,9 @@ import { allCalls, useCalls, useTechnicians } from '../../api/calls.ts';
 import { useSettings } from '../../api/settings.ts';
 import { useVenues } from '../../api/venues.ts';
 import { useCan } from '../../api/use-can.ts';
+import { callsDefaultSort, callsFilterKeys, callsMapQuery, callsTableQuery, venueFilterQuery, type CallsSort } from './calls-queries.ts';
 
-type Sort = 'targetAt' | 'openedAt';
-
-const columns: Column<ServiceCall, Sort>[] = [
+const columns: Column<ServiceCall, CallsSort>[] = [
   {
     header: 'Call',
     cell: (c) => (
@@ -44,28 +44,21 @@ const columns: Column<ServiceCall, Sort>[] = [
 ];
 
 export function CallsPage() {
-  const list = useListParams<Sort>('targetAt', ['state', 'venueId', 'problem', 'technicianId']);
+  const list = useListParams<CallsSort>(callsDefaultSort, callsFilterKeys);
   const { params, extras } = list;
   const canDispatch = useCan('calls:dispatch');
-  const query = {
-    q: params.q || undefined,
-    sort: params.sort,
-    order: params.order,
-    cursor: params.cursor,
-    limit: 50,
-    state: (extras.state || 'open') as 'open',
-    venueId: extras.venueId || undefined,
-    problem: (extras.problem || undefined) as ServiceCall['problem'] | undefined,
-    technicianId: extras.technicianId || undefined,
-  };
+  const query = callsTableQuery(params, extras);
   const calls = useCalls(query);
-  // The map shows every call matching the filters (up to 200), not only this page of the table.
-  const mapCalls = useCalls({ ...query, cursor: undefined, limit: 200 });
+  // When the table's first page already holds every matching call (the usual case), the map shows that page
+  // and no second list is asked for; otherwise the map asks for its own (up to 200).
+  const tableHoldsAll = !query.cursor && !!calls.data && !calls.isPlaceholderData && !calls.data.nextCursor;
+  const mapCalls = useCalls(callsMapQuery(query), !!calls.data && !calls.isPlaceholderData && !tableHoldsAll);
+  const mapItems = (tableHoldsAll ? calls.data : (mapCalls.data ?? calls.data))?.items ?? [];
   const settings = useSettings();
-  const venues = useVenues({ limit: 200, sort: 'name', order: 'asc' });
+  const venues = useVenues(venueFilterQuery);
   const technicians = useTechnicians(canDispatch);
   const now = useNow();
-  const points = (mapCalls.data?.items ?? [])
+  const points = mapItems
     .filter((c) => c.latitude !== null && c.longitude !== null)
     .map((c) => ({
       id: c.id,

@@ -3,15 +3,8 @@ import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Link, useNavigate, useParams, useSearchParams } from 'react-router-dom';
 import type { z } from 'zod';
-import {
-  gameInput,
-  gameKindLabels,
-  gameKinds,
-  gameModelInput,
-  gameStatusLabels,
-  gameStatuses,
-  type Game,
-} from '@bumperline/contracts/games';
+import { gameInput, gameModelInput, type Game } from '@bumperline/contracts/games';
+import { gameKindLabels, gameKinds, gameStatusLabels, gameStatuses } from '@bumperline/contracts/game-vocabulary';
 import { Field, inputClass } from '../../components/field.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
 import { ErrorState, Loading } from '../../components/states.tsx';

@@ -1,6 +1,6 @@
 import { Link, useParams } from 'react-router-dom';
 import { Archive, Pencil } from 'lucide-react';
-import { gameKindLabels } from '@bumperline/contracts/games';
+import { gameKindLabels } from '@bumperline/contracts/game-vocabulary';
 import { PageHeader } from '../../components/page-header.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { GameStatusBadge } from '../../components/game-status-badge.tsx';
@@ -13,7 +13,7 @@ import { formatDuration, useNow } from '../../components/target-clock.tsx';
 import { formatDate, formatDateTime, formatMoney } from '../../lib/format.ts';
 import { useCalls, useOpenCall } from '../../api/calls.ts';
 import { CallStateBadge } from '../../components/call-state-badge.tsx';
-import { callRef, problemKinds, problemLabels, type ProblemKind } from '@bumperline/contracts/calls';
+import { callRef, problemKinds, problemLabels, type ProblemKind } from '@bumperline/contracts/call-vocabulary';
 import { inputClass } from '../../components/field.tsx';
 import { ApiError } from '../../lib/api-client.ts';
 import { useState } from 'react';

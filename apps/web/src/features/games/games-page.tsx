@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { Plus } from 'lucide-react';
-import { gameKindLabels, gameKinds, gameStatusLabels, gameStatuses, type Game } from '@bumperline/contracts/games';
+import type { Game } from '@bumperline/contracts/games';
+import { gameKindLabels, gameKinds, gameStatusLabels, gameStatuses } from '@bumperline/contracts/game-vocabulary';
 import { DataTable, type Column } from '../../components/data-table.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
 import { GameStatusBadge } from '../../components/game-status-badge.tsx';

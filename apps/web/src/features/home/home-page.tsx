@@ -1,6 +1,6 @@
 // Today: what needs attention now on the route.
 import { Link } from 'react-router-dom';
-import { gameStatusLabels, gameStatuses } from '@bumperline/contracts/games';
+import { gameStatusLabels, gameStatuses } from '@bumperline/contracts/game-vocabulary';
 import { PageHeader } from '../../components/page-header.tsx';
 import { GameStatusBadge } from '../../components/game-status-badge.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
@@ -11,7 +11,8 @@ import { useCalls } from '../../api/calls.ts';
 import { useCan } from '../../api/use-can.ts';
 import { CallStateBadge } from '../../components/call-state-badge.tsx';
 import { TargetClock } from '../../components/target-clock.tsx';
-import { callRef } from '@bumperline/contracts/calls';
+import { callRef } from '@bumperline/contracts/call-vocabulary';
+import { downGamesQuery, openCallsQuery } from './today-queries.ts';
 
 export function HomePage() {
   const me = useMe();
@@ -20,7 +21,7 @@ export function HomePage() {
 
 function TodayPage({ firstName }: { firstName: string }) {
   const summary = useGameSummary();
-  const down = useGames({ status: 'down', sort: 'venue', order: 'asc', limit: 50 });
+  const down = useGames(downGamesQuery);
   return (
     <>
       <PageHeader title="Today" subtitle={`Good to see you, ${firstName}. Here is the route at a glance.`} />
@@ -84,7 +85,7 @@ function TodayPage({ firstName }: { firstName: string }) {
 function OpenCalls() {
   const canDispatch = useCan('calls:dispatch');
   const canRead = useCan('calls:read');
-  const calls = useCalls({ state: 'open', sort: 'targetAt', order: 'asc', limit: 8, technicianId: canDispatch ? undefined : 'me' });
+  const calls = useCalls(openCallsQuery(canDispatch));
   if (!canRead) return null;
   return (
     <section className="card mb-4" aria-labelledby="open-calls">

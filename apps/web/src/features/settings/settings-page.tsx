@@ -5,7 +5,7 @@ import { PageHeader } from '../../components/page-header.tsx';
 import { Field, inputClass } from '../../components/field.tsx';
 import { applyServerErrors } from '../../components/form-errors.ts';
 import { ErrorState, Loading } from '../../components/states.tsx';
-import { severities, severityLabels } from '@bumperline/contracts/calls';
+import { severities, severityLabels } from '@bumperline/contracts/call-vocabulary';
 import type { CompanySettings } from '@bumperline/contracts/settings';
 import { useSaveSettings, useSettings } from '../../api/settings.ts';
 

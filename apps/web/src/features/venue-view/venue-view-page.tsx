@@ -1,7 +1,7 @@
 // The venue view: a bar owner's games and their status, their calls and how far along they are,
 // and reporting a problem — phone-first, big touch targets.
 import { useState } from 'react';
-import { problemKinds, problemLabels, type ProblemKind } from '@bumperline/contracts/calls';
+import { problemKinds, problemLabels, type ProblemKind } from '@bumperline/contracts/call-vocabulary';
 import type { VenueView, VenueViewCall } from '@bumperline/contracts/venue-view';
 import { PageHeader } from '../../components/page-header.tsx';
 import { GameStatusBadge } from '../../components/game-status-badge.tsx';

@@ -1,0 +1,157 @@
+// Query plans at the scale seed's size: the largest company (3,000 games in 800 venues, three years of
+// calls) among others. Each main read goes through the real API; every statement it sends is captured
+// and EXPLAINed as the API's own role inside the same company scope — row-level security applies, as in
+// production (the owner role bypasses the policies, so its plans prove nothing). A plan must reach each
+// company table through an index: a sequential scan reads every company's rows.
+import { sql } from 'drizzle-orm';
+import type pg from 'pg';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { hashPassword } from '@bumperline/db/passwords';
+import { withScope } from '@bumperline/db/client';
+import { seedScale } from '@bumperline/db/scale/scale-seed';
+import { buildTestApp, signedInAgent, type Agent, type TestApp } from '../support/app.ts';
+import { TEST_PASSWORD } from '../support/factories.ts';
+
+interface Captured {
+  text: string;
+  values: unknown[];
+}
+
+interface PlanNode {
+  'Node Type': string;
+  'Relation Name'?: string;
+  'Index Name'?: string;
+  Plans?: PlanNode[];
+}
+
+let t: TestApp;
+let captured: Captured[] = [];
+let restore: () => void;
+let largest: { tenantId: string; people: Record<'owner' | 'dispatcher' | 'technician', { id: string; email: string }> };
+const agents: Partial<Record<'owner' | 'dispatcher' | 'technician', Agent>> = {};
+let sample: { callId: string; gameId: string; venueId: string };
+let companyTables: Set<string>;
+
+beforeAll(async () => {
+  t = await buildTestApp();
+  // The full scale: with fewer companies the largest holds most of every table, and a scan of it is the right plan.
+  await seedScale({ ownerUrl: t.db.ownerUrl, companies: 200, largest: { venues: 800, games: 3000, years: 3 } });
+  const [top] = (
+    await t.db.owner.execute<{ tenant_id: string }>(sql`select tenant_id from games group by tenant_id order by count(*) desc limit 1`)
+  ).rows;
+  const people = (
+    await t.db.owner.execute<{ id: string; email: string; role: string }>(
+      sql`select distinct on (m.role) u.id, u.email, m.role from memberships m join users u on u.id = m.user_id
+          where m.tenant_id = ${top!.tenant_id} and m.role in ('owner', 'dispatcher', 'technician') order by m.role, u.email`,
+    )
+  ).rows;
+  largest = { tenantId: top!.tenant_id, people: Object.fromEntries(people.map((p) => [p.role, { id: p.id, email: p.email }])) as never };
+  const hash = await hashPassword(TEST_PASSWORD);
+  for (const p of people) {
+    await t.db.owner.execute(
+      sql`update users set password_hash = ${hash}, email_verified_at = coalesce(email_verified_at, now()) where id = ${p.id}`,
+    );
+  }
+  for (const role of ['owner', 'dispatcher', 'technician'] as const) agents[role] = await signedInAgent(t, largest.people[role].email);
+  const [row] = (
+    await t.db.owner.execute<{ call_id: string; game_id: string; venue_id: string }>(
+      sql`select id as call_id, game_id, venue_id from service_calls where tenant_id = ${largest.tenantId} and venue_id is not null
+          order by opened_at desc limit 1`,
+    )
+  ).rows;
+  sample = { callId: row!.call_id, gameId: row!.game_id, venueId: row!.venue_id };
+  companyTables = new Set(
+    (
+      await t.db.owner.execute<{ table_name: string }>(
+        sql`select table_name from information_schema.columns where table_schema = 'public' and column_name = 'tenant_id'`,
+      )
+    ).rows.map((r) => r.table_name),
+  );
+
+  const pool = t.db.app.$client as pg.Pool & { Client: typeof pg.Client };
+  const proto = pool.Client.prototype as { query: (...args: unknown[]) => unknown };
+  const original = proto.query;
+  proto.query = function (this: unknown, ...args: unknown[]) {
+    const [q, values] = args as [string | { text?: string; values?: unknown[] }, unknown];
+    if (typeof q === 'string') captured.push({ text: q, values: Array.isArray(values) ? values : [] });
+    else if (q?.text) captured.push({ text: q.text, values: q.values ?? (Array.isArray(values) ? values : []) });
+    return original.apply(this, args);
+  };
+  restore = () => {
+    proto.query = original;
+  };
+}, 600_000);
+
+afterAll(async () => {
+  restore?.();
+  await t?.close();
+});
+
+/** The statements a request sent that read company data (not the transaction's own bookkeeping). */
+async function readsOf(agent: Agent, url: string): Promise<Captured[]> {
+  captured = [];
+  await agent.get(url).expect(200);
+  const reads = captured.filter((c) => /^\s*(select|with)\b/i.test(c.text) && !/set_config|session_actor/.test(c.text));
+  return reads;
+}
+
+function nodes(plan: PlanNode): PlanNode[] {
+  return [plan, ...(plan.Plans ?? []).flatMap(nodes)];
+}
+
+async function planOf(userId: string, read: Captured): Promise<PlanNode> {
+  return withScope(t.db.app, { tenantId: largest.tenantId, userId }, async (tx) => {
+    const client = (tx as unknown as { session: { client: pg.PoolClient } }).session.client;
+    const r = await client.query(`explain (format json) ${read.text}`, read.values);
+    return (r.rows[0]['QUERY PLAN'] as { Plan: PlanNode }[])[0]!.Plan;
+  });
+}
+
+describe('query plans at scale, as the app role under row-level security', () => {
+  const reads: [role: 'owner' | 'dispatcher' | 'technician', path: string][] = [
+    ['dispatcher', '/api/calls?state=open'],
+    ['dispatcher', '/api/calls?state=open&sort=openedAt&order=desc'],
+    ['dispatcher', '/api/calls?state=all&sort=openedAt&order=desc'],
+    ['dispatcher', '/api/calls?state=all&sort=targetAt&order=asc'],
+    ['dispatcher', '/api/calls?state=assigned'],
+    ['dispatcher', '/api/calls?state=all&venueId=:venue'],
+    ['dispatcher', '/api/calls?state=all&gameId=:game'],
+    ['dispatcher', '/api/calls/:call'],
+    ['dispatcher', '/api/calls/:call/technicians'],
+    ['technician', '/api/calls?state=open'],
+    ['owner', '/api/games'],
+    ['owner', '/api/games?status=down'],
+    ['owner', '/api/games?venueId=:venue'],
+    ['owner', '/api/games/summary'],
+    ['owner', '/api/games/:game'],
+    ['owner', '/api/games/:game/downtime'],
+    ['owner', '/api/venues'],
+    ['owner', '/api/venues/:venue'],
+    ['dispatcher', '/api/technicians'],
+    ['owner', '/api/team'],
+  ];
+  const resolve = (path: string) => path.replace(':call', sample.callId).replace(':game', sample.gameId).replace(':venue', sample.venueId);
+
+  it.each(reads)('%s GET %s reads company tables only through indexes', async (role, path) => {
+    const found = await readsOf(agents[role]!, resolve(path));
+    expect(found.length).toBeGreaterThan(0);
+    for (const read of found) {
+      const plan = await planOf(largest.people[role].id, read);
+      const seqScans = nodes(plan).filter((n) => n['Node Type'] === 'Seq Scan' && companyTables.has(n['Relation Name'] ?? ''));
+      expect(
+        seqScans.map((n) => n['Relation Name']),
+        `${read.text}\n${JSON.stringify(plan, null, 1)}`,
+      ).toEqual([]);
+    }
+  });
+
+  it('the open-calls list walks the partial index of open calls in target order, and stops at the page', async () => {
+    const [list] = await readsOf(agents.dispatcher!, '/api/calls?state=open');
+    const plan = await planOf(largest.people.dispatcher.id, list!);
+    const used = nodes(plan)
+      .map((n) => n['Index Name'])
+      .filter(Boolean);
+    expect(used).toContain('service_calls_tenant_open_target_idx');
+    expect(nodes(plan).some((n) => n['Node Type'] === 'Sort')).toBe(false);
+  });
+});

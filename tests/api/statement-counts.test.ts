@@ -1,0 +1,83 @@
+// Statements each main read sends to PostgreSQL, counted on the API's own connection pool. A ceiling per
+// endpoint holds the line against N+1 queries and extra round trips (issue: a one-query read cost 9
+// statements, /api/account/me 13): sign-in check 1, the tenant transaction's BEGIN, scope and COMMIT 3,
+// then the endpoint's own reads.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { appWithFullCompany, type FullCompanyApp } from '../support/full-company.ts';
+import type { Agent } from '../support/app.ts';
+import { addGame, openServiceCall } from '../support/call-factories.ts';
+import type pg from 'pg';
+
+let f: FullCompanyApp;
+let statements: string[] = [];
+let restore: () => void;
+
+beforeAll(async () => {
+  f = await appWithFullCompany('Counted Coin-Op');
+  // Every statement the app's pool sends goes through its Client class's query method.
+  const pool = f.t.db.app.$client as pg.Pool & { Client: typeof pg.Client };
+  const proto = pool.Client.prototype as { query: (...args: unknown[]) => unknown };
+  const original = proto.query;
+  proto.query = function (this: unknown, ...args: unknown[]) {
+    const q = args[0] as string | { text?: string };
+    statements.push(typeof q === 'string' ? q : (q?.text ?? '?'));
+    return original.apply(this, args);
+  };
+  restore = () => {
+    proto.query = original;
+  };
+});
+afterAll(async () => {
+  restore?.();
+  await f?.close();
+});
+
+async function count(agent: Agent, url: string): Promise<string[]> {
+  statements = [];
+  await agent.get(url).expect(200);
+  return statements;
+}
+
+describe('statements per request', () => {
+  // [who, what, ceiling]; `:call`, `:game` and `:venue` stand for the full company's rows.
+  const cases: [role: 'owner' | 'dispatcher' | 'technician' | 'venue_contact', path: string, ceiling: number][] = [
+    ['owner', '/api/health', 2],
+    ['owner', '/api/account/me', 6],
+    ['dispatcher', '/api/calls?state=open', 5],
+    ['dispatcher', '/api/calls?state=all&sort=openedAt&order=desc', 5],
+    ['dispatcher', '/api/calls/:call', 8],
+    ['dispatcher', '/api/calls/:call/technicians', 6],
+    ['owner', '/api/games', 5],
+    ['owner', '/api/games/summary', 5],
+    ['owner', '/api/games/:game', 6],
+    ['owner', '/api/venues', 5],
+    ['owner', '/api/venues/:venue', 6],
+    ['owner', '/api/team', 6],
+    ['dispatcher', '/api/technicians', 5],
+    ['owner', '/api/settings', 5],
+    ['technician', '/api/calls?state=open', 5],
+    ['venue_contact', '/api/venue-view', 9],
+  ];
+  const resolve = (path: string) =>
+    path.replace(':call', f.company.downCallId).replace(':game', f.company.gameIds[0]!).replace(':venue', f.company.venueIds[0]!);
+
+  it.each(cases)('%s GET %s sends at most %i statements', async (role, path, ceiling) => {
+    const sent = await count(f.agents[role], resolve(path));
+    // The statements are the failure message, so a rise is easy to read.
+    expect(sent.length, sent.join('\n')).toBeLessThanOrEqual(ceiling);
+    expect(sent[0]).toMatch(/session_actor/);
+  });
+
+  it('a list costs the same statements for many rows as for few (no query per row)', async () => {
+    const before = (await count(f.agents.dispatcher, '/api/calls?state=all')).length;
+    // New games: a report on a game with an unfixed call joins that call instead of opening another.
+    for (let i = 0; i < 5; i++) {
+      const gameId = await addGame(f.t.db, f.company);
+      await openServiceCall(f.t.db, f.company, { gameId, problem: 'no_credit' });
+    }
+    const after = (await count(f.agents.dispatcher, '/api/calls?state=all')).length;
+    expect(after).toBe(before);
+    const listed = await f.agents.dispatcher.get('/api/calls?state=all').expect(200);
+    expect(listed.body.items.length).toBeGreaterThanOrEqual(2 + 5);
+  });
+});
