@@ -41,6 +41,23 @@ describe('games', () => {
     expect(await auditCount(t.db.owner, created.body.id)).toBe(3);
   });
 
+  it('lists each game with its venue, found and sorted by the venue name', async () => {
+    await owner.post('/api/games').set(JSON_HEADERS).send({ modelId: a.modelId, venueId: a.venueIds[2], serial: 'BY-VENUE-3' }).expect(201);
+    await owner.post('/api/games').set(JSON_HEADERS).send({ modelId: a.modelId, serial: 'IN-STORAGE' }).expect(201);
+    const found = await owner.get('/api/games').query({ q: 'Venue 3' }).expect(200);
+    expect(found.body.items.map((g: { serial: string; venueName: string }) => [g.serial, g.venueName])).toContainEqual([
+      'BY-VENUE-3',
+      'Alpha Amusements Venue 3',
+    ]);
+    expect(found.body.items.every((g: { venueName: string }) => g.venueName === 'Alpha Amusements Venue 3')).toBe(true);
+    const byVenue = await owner.get('/api/games').query({ sort: 'venue', order: 'desc', limit: 100 }).expect(200);
+    const names = byVenue.body.items.map((g: { venueName: string | null }) => g.venueName ?? '');
+    expect(names.length).toBeGreaterThan(2);
+    expect(names).toEqual([...names].sort((x: string, y: string) => y.toLowerCase().localeCompare(x.toLowerCase())));
+    // A game in storage has no venue: it sorts as an empty name, last when descending.
+    expect(names.at(-1)).toBe('');
+  });
+
   it("another company's game is 404", async () => {
     await owner.get(`/api/games/${b.gameIds[0]}`).expect(404);
     await owner.patch(`/api/games/${b.gameIds[0]}`).set(JSON_HEADERS).send({ version: 1, status: 'down' }).expect(404);

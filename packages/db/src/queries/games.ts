@@ -8,11 +8,14 @@ import { decodeCursor, keysetOrder, keysetWhere, toPage, type SortKey } from './
 import { newTagToken } from './game-tags.ts';
 import { updateAtVersion } from './versioned-update.ts';
 
+/** A game's venue name, looked up by key (null for a game in storage). */
+const venueNameOfGame = sql<string | null>`(select v.name from venues v where v.tenant_id = ${games.tenantId} and v.id = ${games.venueId})`;
+
 const sortKeys: Record<'title' | 'serial' | 'status' | 'venue' | 'createdAt', SortKey> = {
   title: { expr: sql`lower(${gameModels.title})`, type: 'text' },
   serial: { expr: sql`lower(${games.serial})`, type: 'text' },
   status: { expr: sql`${games.status}::text`, type: 'text' },
-  venue: { expr: sql`lower(coalesce(${venues.name}, ''))`, type: 'text' },
+  venue: { expr: sql`lower(coalesce(${venueNameOfGame}, ''))`, type: 'text' },
   createdAt: { expr: sql`${games.createdAt}`, type: 'timestamptz' },
 };
 
@@ -69,11 +72,16 @@ export async function listGames(tx: Tx, p: GameListParams) {
     p.status ? eq(games.status, p.status) : undefined,
     p.kind ? eq(gameModels.kind, p.kind) : undefined,
     like
-      ? sql`(${games.serial} ilike ${like} or ${gameModels.title} ilike ${like} or ${gameModels.maker} ilike ${like} or ${venues.name} ilike ${like})`
+      ? sql`(${games.serial} ilike ${like} or ${gameModels.title} ilike ${like} or ${gameModels.maker} ilike ${like} or ${venueNameOfGame} ilike ${like})`
       : undefined,
     keysetWhere(key, games.id, p.order, decodeCursor(p.cursor)),
   ];
-  const rows = (await fromGames(tx, { ...gameColumns, sortValue: sql<string>`${key.expr}::text` })
+  // No join with venues: the name is a sub-select, which PostgreSQL runs for the page's rows only, after
+  // the sort and limit (a join read every venue of a large company to keep fifty games).
+  const rows = (await tx
+    .select({ ...gameColumns, venueName: venueNameOfGame, sortValue: sql<string>`${key.expr}::text` } as unknown as typeof gameColumns)
+    .from(games)
+    .innerJoin(gameModels, and(eq(gameModels.tenantId, games.tenantId), eq(gameModels.id, games.modelId)))
     .where(and(...filters))
     .orderBy(...keysetOrder(key, games.id, p.order))
     .limit(p.limit + 1)) as unknown as (GameRow & { sortValue: string })[];

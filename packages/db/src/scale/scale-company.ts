@@ -456,6 +456,25 @@ function writeCall(
     updated_at: new Date(last?.at ?? call.opened),
   });
 
+  // A quarter of game-tag reports come with a photo of the fault. Only the rows: no image file is written,
+  // so these photos answer 404 (the benchmarks read lists and call pages, never the pictures).
+  if (source === 'game_tag' && dice.chance(0.25)) {
+    const photoId = dice.uuid();
+    t.callPhotos.add({
+      tenant_id: c.tenantId,
+      id: photoId,
+      call_id: id,
+      storage_key: `scale/${photoId}.jpg`,
+      thumb_key: `scale/${photoId}-thumb.jpg`,
+      content_type: 'image/jpeg',
+      bytes: dice.int(80_000, 400_000),
+      width: 1600,
+      height: 1200,
+      uploaded_by: 'reporter',
+      created_at: new Date(call.opened),
+    });
+  }
+
   const event = (
     at: number,
     kind: string,

@@ -8,6 +8,9 @@ import { venues } from './venues.ts';
 import { games } from './games.ts';
 import { tenantTable } from './tenant-table.ts';
 
+/** The partial indexes' condition: a call still open (callStateGroups.open, written out as SQL). */
+const isOpen = sql.raw(`state in (${callStateGroups.open.map((s) => `'${s}'`).join(', ')})`);
+
 export const serviceCalls = tenantTable(
   'service_calls',
   {
@@ -46,14 +49,16 @@ export const serviceCalls = tenantTable(
     // One state (a filter, the warnings job, a game's unfixed calls), in target order.
     index('service_calls_tenant_state_idx').on(t.tenantId, t.state, t.targetAt, t.id),
     // The open list (Today, Calls): few rows of many, already in the order the list shows.
-    index('service_calls_tenant_open_target_idx')
-      .on(t.tenantId, t.targetAt, t.id)
-      .where(sql.raw(`state in (${callStateGroups.open.map((s) => `'${s}'`).join(', ')})`)),
+    index('service_calls_tenant_open_target_idx').on(t.tenantId, t.targetAt, t.id).where(isOpen),
     // Every state, newest or by target first.
     index('service_calls_tenant_opened_idx').on(t.tenantId, t.openedAt, t.id),
     index('service_calls_tenant_target_idx').on(t.tenantId, t.targetAt, t.id),
     index('service_calls_tenant_game_idx').on(t.tenantId, t.gameId, t.openedAt),
     index('service_calls_tenant_tech_idx').on(t.tenantId, t.technicianId, t.state),
+    // A technician's open calls (their list, and their load when dispatch ranks technicians).
+    index('service_calls_tenant_tech_open_idx').on(t.tenantId, t.technicianId, t.targetAt, t.id).where(isOpen),
+    // A venue's calls (the venue page, the venue contact's view).
+    index('service_calls_tenant_venue_idx').on(t.tenantId, t.venueId, t.openedAt),
   ],
 );
 
