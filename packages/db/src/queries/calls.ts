@@ -108,14 +108,25 @@ export async function listCalls(tx: Tx, p: CallListParams) {
         : undefined,
     p.onlyVenueIds ? (p.onlyVenueIds.length ? inArray(serviceCalls.venueId, p.onlyVenueIds) : sql`false`) : undefined,
     like
-      ? sql`(${gameModels.title} ilike ${like} or ${venues.name} ilike ${like} or ${games.serial} ilike ${like} or ${serviceCalls.note} ilike ${like})`
+      ? sql`(${serviceCalls.note} ilike ${like}
+          or exists (select 1 from games g join game_models m on m.tenant_id = g.tenant_id and m.id = g.model_id
+                     where g.tenant_id = ${serviceCalls.tenantId} and g.id = ${serviceCalls.gameId} and (m.title ilike ${like} or g.serial ilike ${like}))
+          or exists (select 1 from venues v where v.tenant_id = ${serviceCalls.tenantId} and v.id = ${serviceCalls.venueId} and v.name ilike ${like}))`
       : undefined,
     keysetWhere(key, serviceCalls.id, p.order, decodeCursor(p.cursor)),
   ];
-  const rows = (await fromCalls(tx, { ...callColumns, sortValue: sql<string>`${key.expr}::text` })
+  // The page is chosen from the calls table alone (an index in list order, stopping at the page), then
+  // only its rows are joined with their game, venue and technician. Joined first, PostgreSQL would read
+  // every game and venue of a large company to show fifty calls.
+  const page = tx
+    .select({ id: serviceCalls.id })
+    .from(serviceCalls)
     .where(and(...filters))
     .orderBy(...keysetOrder(key, serviceCalls.id, p.order))
-    .limit(p.limit + 1)) as unknown as (CallView & { sortValue: string })[];
+    .limit(p.limit + 1);
+  const rows = (await fromCalls(tx, { ...callColumns, sortValue: sql<string>`${key.expr}::text` })
+    .where(and(eq(serviceCalls.tenantId, currentTenant), sql`${serviceCalls.id} = any(array(${page}))`))
+    .orderBy(...keysetOrder(key, serviceCalls.id, p.order))) as unknown as (CallView & { sortValue: string })[];
   return toPage(rows, p.limit);
 }
 
