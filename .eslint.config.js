@@ -16,6 +16,14 @@ const features = readdirSync(new URL(`${web}/features`, import.meta.url), { with
   .filter((entry) => entry.isDirectory())
   .map((entry) => entry.name);
 
+// The web app reaches the database only through the API.
+const webNeverImports = {
+  group: ['@bumperline/db', '@bumperline/db/*', '@bumperline/api', '@bumperline/api/*', 'drizzle-orm', 'drizzle-orm/*', 'pg', 'pg/*'],
+  message: 'The web app reaches the database only through the API: import types from @bumperline/contracts.',
+};
+// Contracts files that import no zod, so the first screen may take values from them.
+const zodFreeContracts = ['roles', 'call-vocabulary', 'game-vocabulary', 'sign-in-refusals'];
+
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', 'test-results/**', 'drizzle/**', '**/*.tmp.ts'] },
   js.configs.recommended,
@@ -122,23 +130,25 @@ export default tseslint.config(
   },
   {
     files: ['apps/web/**/*.{ts,tsx}'],
+    rules: { '@typescript-eslint/no-restricted-imports': ['error', { patterns: [webNeverImports] }] },
+  },
+  {
+    // What the first screen loads (the shell, fetchers, shared components, Today and the technician's home)
+    // takes only types from the contracts' zod schemas: a value import would put zod in the main bundle.
+    // The words and states a screen shows live in zod-free files (call-vocabulary, game-vocabulary, …).
+    files: [`${web}/{app,api,components,lib}/**/*.{ts,tsx}`, `${web}/features/home/**/*.{ts,tsx}`, `${web}/main.tsx`],
+    ignores: ['**/*.test.{ts,tsx}'],
     rules: {
       '@typescript-eslint/no-restricted-imports': [
         'error',
         {
           patterns: [
+            webNeverImports,
             {
-              group: [
-                '@bumperline/db',
-                '@bumperline/db/*',
-                '@bumperline/api',
-                '@bumperline/api/*',
-                'drizzle-orm',
-                'drizzle-orm/*',
-                'pg',
-                'pg/*',
-              ],
-              message: 'The web app reaches the database only through the API: import types from @bumperline/contracts.',
+              regex: `^@bumperline/contracts/(?!(${zodFreeContracts.join('|')})$)`,
+              allowTypeImports: true,
+              message:
+                'The first screen imports only types from the contracts with zod schemas (zod would join the main bundle): take values from a zod-free contracts file.',
             },
           ],
         },

@@ -98,6 +98,24 @@ const forbidden: { name: string; file: string; code: string; rule: string }[] = 
     rule: '@typescript-eslint/no-restricted-imports',
   },
   {
+    name: 'the first screen taking a value from a contracts file with zod schemas (zod would join the main bundle)',
+    file: 'apps/web/src/features/home/planted.tsx',
+    code: "import { callListQuery } from '@bumperline/contracts/calls';\nexport const planted = callListQuery;\n",
+    rule: '@typescript-eslint/no-restricted-imports',
+  },
+  {
+    name: 'a fetcher taking a value from a contracts file with zod schemas',
+    file: 'apps/web/src/api/planted.ts',
+    code: "import { gameInput } from '@bumperline/contracts/games';\nexport const planted = gameInput;\n",
+    rule: '@typescript-eslint/no-restricted-imports',
+  },
+  {
+    name: 'the first screen still shut off from packages/db by its own stricter rule',
+    file: 'apps/web/src/components/planted.tsx',
+    code: "import { createDb } from '@bumperline/db/client';\nexport const planted = createDb;\n",
+    rule: '@typescript-eslint/no-restricted-imports',
+  },
+  {
     name: 'the API writing SQL with drizzle-orm',
     file: 'apps/api/src/routes/planted.ts',
     code: "import { eq, sql } from 'drizzle-orm';\nexport const planted = [eq, sql];\n",
@@ -112,6 +130,24 @@ const forbidden: { name: string; file: string; code: string; rule: string }[] = 
 ];
 
 const allowed: { name: string; file: string; code: string }[] = [
+  {
+    name: 'the first screen taking types from any contracts file and values from the zod-free ones',
+    file: 'apps/web/src/features/home/planted.tsx',
+    code: [
+      "import type { CallListQuery } from '@bumperline/contracts/calls';",
+      "import { type Game } from '@bumperline/contracts/games';",
+      "import { problemLabels } from '@bumperline/contracts/call-vocabulary';",
+      "import { roleLabels } from '@bumperline/contracts/roles';",
+      'export type Planted = [CallListQuery, Game];',
+      'export const planted = [problemLabels, roleLabels];',
+      '',
+    ].join('\n'),
+  },
+  {
+    name: 'a form screen, loaded on demand, taking its zod schema',
+    file: 'apps/web/src/features/games/planted.tsx',
+    code: "import { gameInput } from '@bumperline/contracts/games';\nexport const planted = gameInput;\n",
+  },
   {
     name: 'a feature importing its own files, shared code, lib/paths.ts and contracts',
     file: 'apps/web/src/features/calls/planted.tsx',
