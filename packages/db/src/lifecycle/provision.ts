@@ -101,11 +101,25 @@ export async function runMigrations(ownerUrl: string): Promise<void> {
   }
 }
 
-/** Roles, database (created when missing) and migrations: everything a fresh server needs. */
+/** Any constant: the advisory lock provisioning holds on the admin connection ("BL" and "prov" in its bytes). */
+const PROVISION_LOCK = 0x424c_7072_6f76;
+
+/**
+ * Roles, database (created when missing) and migrations: everything a fresh server needs. Several API
+ * instances starting at once take turns (an advisory lock on the admin database, held by a connection
+ * of its own), so the first provisions and the others find everything done.
+ */
 export async function provisionDatabase(adminUrl: string, database: string): Promise<DatabaseUrls> {
-  await ensureRoles(adminUrl);
-  if (!(await databaseExists(adminUrl, database))) await createDatabase(adminUrl, database);
-  const urls = urlsFor(adminUrl, database);
-  await runMigrations(urls.ownerUrl);
-  return urls;
+  return adminQuery(adminUrl, async (lock) => {
+    await lock.query('select pg_advisory_lock($1)', [PROVISION_LOCK]);
+    try {
+      await ensureRoles(adminUrl);
+      if (!(await databaseExists(adminUrl, database))) await createDatabase(adminUrl, database);
+      const urls = urlsFor(adminUrl, database);
+      await runMigrations(urls.ownerUrl);
+      return urls;
+    } finally {
+      await lock.query('select pg_advisory_unlock($1)', [PROVISION_LOCK]);
+    }
+  });
 }
