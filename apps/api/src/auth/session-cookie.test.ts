@@ -4,7 +4,7 @@
 // tests/api/session-cookie.test.ts.
 import { hkdfSync, randomUUID } from 'node:crypto';
 import { EncryptJWT } from 'jose';
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { sessionCookieName, sessionCookieReader } from './session-cookie.ts';
 
 const secret = 'a-test-secret-of-at-least-thirty-two-characters';
@@ -40,6 +40,38 @@ describe('session cookie reader', () => {
     expect(await reader.sessionId(`${name}=not-a-token`)).toBeUndefined();
     expect(await reader.sessionId(undefined)).toBeUndefined();
     expect(await reader.sessionId('theme=dark')).toBeUndefined();
+  });
+
+  describe('a cookie read before (remembered, not decrypted again)', () => {
+    afterEach(() => vi.useRealTimers());
+
+    it('gives the same id again, and nothing once the expiry it carried has passed', async () => {
+      vi.useFakeTimers({ toFake: ['Date'] });
+      const remembering = sessionCookieReader({ secret, secureCookies: false });
+      const sid = randomUUID();
+      const cookie = `${name}=${await authJsToken({ secret, name, sid, expiresIn: 60 })}`;
+      expect(await remembering.sessionId(cookie)).toBe(sid);
+      expect(await remembering.sessionId(`other=1; ${cookie}`)).toBe(sid);
+      vi.setSystemTime(Date.now() + 60_000);
+      // Within the clock tolerance it still counts, as it would when decrypted.
+      expect(await remembering.sessionId(cookie)).toBe(sid);
+      vi.setSystemTime(Date.now() + 16_000);
+      expect(await remembering.sessionId(cookie)).toBeUndefined();
+      expect(await remembering.sessionId(cookie)).toBeUndefined();
+    });
+
+    it('does not accept a tampered copy of it, nor remember a cookie that failed', async () => {
+      const remembering = sessionCookieReader({ secret, secureCookies: false });
+      const sid = randomUUID();
+      const token = await authJsToken({ secret, name, sid });
+      expect(await remembering.sessionId(`${name}=${token}`)).toBe(sid);
+      const tampered = token.slice(0, -4) + (token.endsWith('AAAA') ? 'BBBB' : 'AAAA');
+      expect(await remembering.sessionId(`${name}=${tampered}`)).toBeUndefined();
+      const forged = await authJsToken({ secret: `${secret}-other`, name, sid });
+      expect(await remembering.sessionId(`${name}=${forged}`)).toBeUndefined();
+      expect(await remembering.sessionId(`${name}=${forged}`)).toBeUndefined();
+      expect(await remembering.sessionId(`${name}=${token}`)).toBe(sid);
+    });
   });
 
   it('takes no id that is not a string', async () => {
