@@ -1,2 +1,2 @@
-CREATE INDEX "service_calls_tenant_tech_open_idx" ON "service_calls" USING btree ("tenant_id","technician_id","target_at","id") WHERE state in ('reported', 'assigned', 'on_the_way', 'on_site', 'waiting_parts', 'at_shop', 'fixed');--> statement-breakpoint
+CREATE INDEX "service_calls_tenant_tech_open_idx" ON "service_calls" USING btree ("tenant_id","technician_id","target_at","id","state") WHERE state in ('reported', 'assigned', 'on_the_way', 'on_site', 'waiting_parts', 'at_shop', 'fixed');--> statement-breakpoint
 CREATE INDEX "service_calls_tenant_venue_idx" ON "service_calls" USING btree ("tenant_id","venue_id","opened_at");

@@ -1,16 +1,21 @@
 // The company's technicians: skills, home base and open load for dispatch, and the narrow lookup that
 // finds a technician from the phone number an SMS reply came from.
-import { and, eq, sql } from 'drizzle-orm';
+import { and, eq, inArray, sql } from 'drizzle-orm';
 import { callStateGroups } from '@bumperline/contracts/calls';
 import type { Db, Tx } from '../client.ts';
-import { memberships, technicianProfiles, users } from '../schema/index.ts';
+import { memberships, serviceCalls, technicianProfiles, users } from '../schema/index.ts';
 import { currentTenant } from '../schema/rls.ts';
-
-/** A Postgres array literal of the states that count towards a technician's load. */
-const technicianLoadStates = `{${callStateGroups.technicianLoad.join(',')}}`;
 
 /** Technicians of the company with their skills, home base, phone and open load. */
 export async function listTechnicians(tx: Tx) {
+  // The load is counted in one pass over the company's calls in those states (the state index), not
+  // once per technician: a per-technician count read every call they ever had.
+  const load = tx
+    .select({ technicianId: serviceCalls.technicianId, n: sql<number>`count(*)::int`.as('n') })
+    .from(serviceCalls)
+    .where(and(eq(serviceCalls.tenantId, currentTenant), inArray(serviceCalls.state, [...callStateGroups.technicianLoad])))
+    .groupBy(serviceCalls.technicianId)
+    .as('load');
   return tx
     .select({
       userId: users.id,
@@ -19,11 +24,12 @@ export async function listTechnicians(tx: Tx) {
       skills: sql<string[]>`coalesce(${technicianProfiles.skills}, '{}'::text[])`,
       homeLatitude: technicianProfiles.homeLatitude,
       homeLongitude: technicianProfiles.homeLongitude,
-      openCalls: sql<number>`(select count(*)::int from service_calls c where c.tenant_id = "memberships"."tenant_id" and c.technician_id = "users"."id" and c.state = any(${technicianLoadStates}::text[]))`,
+      openCalls: sql<number>`coalesce(${load.n}, 0)`,
     })
     .from(memberships)
     .innerJoin(users, eq(users.id, memberships.userId))
     .leftJoin(technicianProfiles, and(eq(technicianProfiles.tenantId, memberships.tenantId), eq(technicianProfiles.userId, users.id)))
+    .leftJoin(load, eq(load.technicianId, users.id))
     .where(and(eq(memberships.tenantId, currentTenant), eq(memberships.role, 'technician')))
     .orderBy(users.name);
 }

@@ -55,8 +55,9 @@ export const serviceCalls = tenantTable(
     index('service_calls_tenant_target_idx').on(t.tenantId, t.targetAt, t.id),
     index('service_calls_tenant_game_idx').on(t.tenantId, t.gameId, t.openedAt),
     index('service_calls_tenant_tech_idx').on(t.tenantId, t.technicianId, t.state),
-    // A technician's open calls (their list, and their load when dispatch ranks technicians).
-    index('service_calls_tenant_tech_open_idx').on(t.tenantId, t.technicianId, t.targetAt, t.id).where(isOpen),
+    // A technician's open calls: their list, and their load when dispatch ranks technicians (the state is
+    // in the index, so the load is counted from the index alone).
+    index('service_calls_tenant_tech_open_idx').on(t.tenantId, t.technicianId, t.targetAt, t.id, t.state).where(isOpen),
     // A venue's calls (the venue page, the venue contact's view).
     index('service_calls_tenant_venue_idx').on(t.tenantId, t.venueId, t.openedAt),
   ],
