@@ -11,11 +11,7 @@ import { withScope } from '@bumperline/db/client';
 import { seedScale } from '@bumperline/db/scale/scale-seed';
 import { buildTestApp, signedInAgent, type Agent, type TestApp } from '../support/app.ts';
 import { TEST_PASSWORD } from '../support/factories.ts';
-
-interface Captured {
-  text: string;
-  values: unknown[];
-}
+import { recordStatements, type SentStatement, type StatementLog } from '../support/statement-log.ts';
 
 interface PlanNode {
   'Node Type': string;
@@ -27,8 +23,7 @@ interface PlanNode {
 }
 
 let t: TestApp;
-let captured: Captured[] = [];
-let restore: () => void;
+let statements: StatementLog;
 let largest: { tenantId: string; people: Record<'owner' | 'dispatcher' | 'technician', { id: string; email: string }> };
 const agents: Partial<Record<'owner' | 'dispatcher' | 'technician', Agent>> = {};
 let sample: { callId: string; gameId: string; venueId: string };
@@ -77,31 +72,19 @@ beforeAll(async () => {
   );
   expect([...companyTables]).toEqual(expect.arrayContaining(['service_calls', 'call_events', 'call_photos', 'games', 'venues', 'outbox']));
 
-  const pool = t.db.app.$client as pg.Pool & { Client: typeof pg.Client };
-  const proto = pool.Client.prototype as { query: (...args: unknown[]) => unknown };
-  const original = proto.query;
-  proto.query = function (this: unknown, ...args: unknown[]) {
-    const [q, values] = args as [string | { text?: string; values?: unknown[] }, unknown];
-    if (typeof q === 'string') captured.push({ text: q, values: Array.isArray(values) ? values : [] });
-    else if (q?.text) captured.push({ text: q.text, values: q.values ?? (Array.isArray(values) ? values : []) });
-    return original.apply(this, args);
-  };
-  restore = () => {
-    proto.query = original;
-  };
+  statements = recordStatements();
 }, 600_000);
 
 afterAll(async () => {
-  restore?.();
+  statements?.stop();
   await t?.close();
 });
 
 /** The statements a request sent that read company data (not the transaction's own bookkeeping). */
-async function readsOf(agent: Agent, url: string): Promise<Captured[]> {
-  captured = [];
+async function readsOf(agent: Agent, url: string): Promise<SentStatement[]> {
+  statements.take();
   await agent.get(url).expect(200);
-  const reads = captured.filter((c) => /^\s*(select|with)\b/i.test(c.text) && !/set_config|session_actor/.test(c.text));
-  return reads;
+  return statements.take().filter((c) => /^\s*(select|with)\b/i.test(c.text) && !/set_config|session_actor/.test(c.text));
 }
 
 /** The plan as indented lines of node, table and index: enough to see what went wrong. */
@@ -120,7 +103,7 @@ function nodes(plan: PlanNode): PlanNode[] {
 }
 
 /** The plan; with `analyze`, run for real, with the rows each node returned. */
-async function planOf(userId: string, read: Captured, analyze = false): Promise<PlanNode> {
+async function planOf(userId: string, read: SentStatement, analyze = false): Promise<PlanNode> {
   return withScope(t.db.app, { tenantId: largest.tenantId, userId }, async (tx) => {
     const client = (tx as unknown as { session: { client: pg.PoolClient } }).session.client;
     const r = await client.query(`explain (format json${analyze ? ', analyze' : ''}) ${read.text}`, read.values);

@@ -6,36 +6,24 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { appWithFullCompany, type FullCompanyApp } from '../support/full-company.ts';
 import type { Agent } from '../support/app.ts';
 import { addGame, openServiceCall } from '../support/call-factories.ts';
-import type pg from 'pg';
+import { recordStatements, type StatementLog } from '../support/statement-log.ts';
 
 let f: FullCompanyApp;
-let statements: string[] = [];
-let restore: () => void;
+let statements: StatementLog;
 
 beforeAll(async () => {
   f = await appWithFullCompany('Counted Coin-Op');
-  // Every statement the app's pool sends goes through its Client class's query method.
-  const pool = f.t.db.app.$client as pg.Pool & { Client: typeof pg.Client };
-  const proto = pool.Client.prototype as { query: (...args: unknown[]) => unknown };
-  const original = proto.query;
-  proto.query = function (this: unknown, ...args: unknown[]) {
-    const q = args[0] as string | { text?: string };
-    statements.push(typeof q === 'string' ? q : (q?.text ?? '?'));
-    return original.apply(this, args);
-  };
-  restore = () => {
-    proto.query = original;
-  };
+  statements = recordStatements();
 });
 afterAll(async () => {
-  restore?.();
+  statements?.stop();
   await f?.close();
 });
 
 async function count(agent: Agent, url: string): Promise<string[]> {
-  statements = [];
+  statements.take();
   await agent.get(url).expect(200);
-  return statements;
+  return statements.take().map((s) => s.text);
 }
 
 describe('statements per request', () => {

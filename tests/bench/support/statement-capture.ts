@@ -7,13 +7,13 @@
 import type { AddressInfo } from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
-import pg from 'pg';
 import { createApp } from '@bumperline/api/app';
 import { createLogger } from '@bumperline/api/http/logger';
 import { createMailer } from '@bumperline/api/services/mailer';
 import { folderPhotoStore } from '@bumperline/api/services/photo-store';
 import { createDb } from '@bumperline/db/client';
 import type { CapturedStatement } from './load.ts';
+import { recordStatements, type SentStatement } from '../../support/statement-log.ts';
 
 export interface CapturedRequest {
   /** Statements the request sent in all, the sign-in check included. */
@@ -21,8 +21,6 @@ export interface CapturedRequest {
   /** Its tenant-scoped transactions, each from BEGIN to COMMIT. */
   transactions: CapturedStatement[][];
 }
-
-const textOf = (q: unknown) => (typeof q === 'string' ? q : ((q as { text?: string })?.text ?? ''));
 
 export async function captureStatements(appUrl: string, authSecret: string, requests: { path: string; cookie: string }[]) {
   const db = createDb(appUrl, { max: 4 });
@@ -39,46 +37,39 @@ export async function captureStatements(appUrl: string, authSecret: string, requ
   await new Promise((resolve) => server.once('listening', resolve));
   const base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
 
-  let log: { client: unknown; statement: CapturedStatement }[] = [];
-  const proto = pg.Client.prototype as unknown as { query: (...args: unknown[]) => unknown };
-  const original = proto.query;
-  proto.query = function (this: unknown, ...args: unknown[]) {
-    const [query, values] = args;
-    log.push({
-      client: this,
-      statement: { query: query as CapturedStatement['query'], values: Array.isArray(values) ? values : undefined },
-    });
-    return original.apply(this, args);
-  };
+  const statements = recordStatements();
   const captured = new Map<string, CapturedRequest>();
   try {
     for (const r of requests) {
-      log = [];
+      statements.take();
       const res = await fetch(base + r.path, { headers: { cookie: r.cookie } });
       await res.arrayBuffer();
       if (res.status !== 200) throw new Error(`${r.path} answered ${res.status} while its statements were captured`);
-      captured.set(r.path, { total: log.length, transactions: scopedTransactions(log) });
+      const sent = statements.take();
+      captured.set(r.path, { total: sent.length, transactions: scopedTransactions(sent) });
     }
   } finally {
-    proto.query = original;
+    statements.stop();
     server.close();
     await db.$client.end();
   }
   return captured;
 }
 
-function scopedTransactions(log: { client: unknown; statement: CapturedStatement }[]): CapturedStatement[][] {
-  const open = new Map<unknown, CapturedStatement[]>();
+function scopedTransactions(sent: SentStatement[]): CapturedStatement[][] {
+  const open = new Map<unknown, SentStatement[]>();
   const done: CapturedStatement[][] = [];
-  for (const { client, statement } of log) {
-    const text = textOf(statement.query).trim().toLowerCase();
-    if (text.startsWith('begin')) open.set(client, []);
-    const tx = open.get(client);
+  for (const statement of sent) {
+    const text = statement.text.trim().toLowerCase();
+    if (text.startsWith('begin')) open.set(statement.client, []);
+    const tx = open.get(statement.client);
     if (!tx) continue;
     tx.push(statement);
     if (text.startsWith('commit') || text.startsWith('rollback')) {
-      open.delete(client);
-      if (tx.some((s) => textOf(s.query).includes("set_config('app.tenant_id'"))) done.push(tx);
+      open.delete(statement.client);
+      if (tx.some((s) => s.text.includes("set_config('app.tenant_id'"))) {
+        done.push(tx.map((s) => ({ query: s.query, values: s.values.length ? s.values : undefined })));
+      }
     }
   }
   return done;

@@ -1,15 +1,8 @@
 // What a request knows about who is asking, read from the database on every request.
-import type { Role } from '@bumperline/contracts/roles';
+import type { SessionActor } from '@bumperline/db/queries/identity';
 
-export interface Actor {
-  userId: string;
-  sessionId: string;
-  email: string;
-  name: string;
-  tenantId: string | null;
-  role: Role | null;
-  isPlatformAdmin: boolean;
-}
+/** The session's person, company and role, as the one sign-in statement reads them (auth/load-actor.ts). */
+export type Actor = SessionActor;
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace

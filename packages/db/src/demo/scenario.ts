@@ -112,7 +112,7 @@ export const streets = [
   'Loomis Row',
 ];
 
-const contactFirst = [
+export const contactFirst = [
   'Rosalind',
   'Tobias',
   'Marisol',
@@ -128,7 +128,7 @@ const contactFirst = [
   'Emeka',
   'Wren',
 ];
-const contactLast = [
+export const contactLast = [
   'Halvorsen',
   'Okonkwo',
   'Prendergast',

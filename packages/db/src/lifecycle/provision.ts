@@ -33,7 +33,8 @@ function withDatabase(url: string, database: string, user?: string, password?: s
   return u.toString();
 }
 
-async function adminQuery<T>(adminUrl: string, fn: (c: pg.Client) => Promise<T>): Promise<T> {
+/** Runs fn on a connection of its own to the admin URL, closed afterwards. */
+export async function adminQuery<T>(adminUrl: string, fn: (c: pg.Client) => Promise<T>): Promise<T> {
   const client = new pg.Client({ connectionString: adminUrl });
   await client.connect();
   try {

@@ -1,20 +1,9 @@
 // The scale data's own database on a server we administer: made afresh, migrated, loaded, and marked
 // complete, so a benchmark can tell a finished load from one that was interrupted.
-import pg from 'pg';
-import { dropDatabase, provisionDatabase, urlsFor, type DatabaseUrls } from '../lifecycle/provision.ts';
+import { adminQuery, dropDatabase, provisionDatabase, urlsFor, type DatabaseUrls } from '../lifecycle/provision.ts';
 import { SCALE_DATABASE, seedScale, type ScaleOptions, type ScaleResult } from './scale-seed.ts';
 
 const MARK = 'bumperline scale data, complete';
-
-async function asAdmin<T>(adminUrl: string, fn: (c: pg.Client) => Promise<T>): Promise<T> {
-  const client = new pg.Client({ connectionString: adminUrl });
-  await client.connect();
-  try {
-    return await fn(client);
-  } finally {
-    await client.end();
-  }
-}
 
 /** Drops the scale database if present, makes it again at the latest migration, and loads the scale data. */
 export async function refreshScaleDatabase(
@@ -25,13 +14,13 @@ export async function refreshScaleDatabase(
   await dropDatabase(adminUrl, database);
   const urls = await provisionDatabase(adminUrl, database);
   const result = await seedScale({ ...options, ownerUrl: urls.ownerUrl });
-  await asAdmin(adminUrl, (c) => c.query(`COMMENT ON DATABASE "${database}" IS '${MARK}'`));
+  await adminQuery(adminUrl, (c) => c.query(`COMMENT ON DATABASE "${database}" IS '${MARK}'`));
   return { ...result, urls };
 }
 
 /** The scale database's URLs when a load finished in it (migrated to the latest first), else undefined. */
 export async function readyScaleDatabase(adminUrl: string, database = SCALE_DATABASE): Promise<DatabaseUrls | undefined> {
-  const comment = await asAdmin(adminUrl, (c) =>
+  const comment = await adminQuery(adminUrl, (c) =>
     c.query<{ comment: string | null }>(`select shobj_description(oid, 'pg_database') as comment from pg_database where datname = $1`, [
       database,
     ]),

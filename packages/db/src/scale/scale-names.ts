@@ -1,5 +1,6 @@
 // Invented names for the scale data: operator companies, game models, people. Metro centres are real
 // public map coordinates; every company, venue, person, maker and title is made up.
+import { contactFirst, contactLast } from '../demo/scenario.ts';
 
 /** Where a company's route runs: a metro centre and its time zone. */
 export const metros = [
@@ -74,36 +75,7 @@ export function venueName(i: number): string {
   return `${first} ${venueKinds[Math.floor(i / 20) % venueKinds.length]}${i >= 220 ? ` ${Math.floor(i / 220) + 1}` : ''}`;
 }
 
-const firstNames = [
-  'Rosalind',
-  'Tobias',
-  'Marisol',
-  'Desmond',
-  'Ingrid',
-  'Lamar',
-  'Yusuf',
-  'Greta',
-  'Colm',
-  'Anika',
-  'Soledad',
-  'Emeka',
-  'Wren',
-];
-const lastNames = [
-  'Halvorsen',
-  'Okonkwo',
-  'Prendergast',
-  'Zielinski',
-  'Abernathy',
-  'Villanueva',
-  'Thistlewood',
-  'Mbeki',
-  'Novak',
-  'Quintero',
-  'Fairbairn',
-];
-
-/** The i-th person's name (more combinations than the demo's contact names). */
+/** The i-th person's name, from the demo's name lists (every combination, where the demo uses a few). */
 export function personName(i: number): string {
-  return `${firstNames[i % firstNames.length]} ${lastNames[Math.floor(i / firstNames.length) % lastNames.length]}`;
+  return `${contactFirst[i % contactFirst.length]} ${contactLast[Math.floor(i / contactFirst.length) % contactLast.length]}`;
 }
