@@ -40,6 +40,11 @@ const whoMay: Record<Permission, readonly Role[]> = {
   'calls:work': ['owner', 'dispatcher', 'technician'],
   'calls:contacts': ['owner', 'dispatcher'],
   'settings:manage': ['owner'],
+  'bench:read': ['owner', 'dispatcher', 'technician'],
+  'parts-lists:write': ['owner', 'dispatcher', 'technician'],
+  'boards:write': ['owner', 'dispatcher', 'technician'],
+  'bench:work': ['owner', 'dispatcher', 'technician'],
+  'bench-templates:write': ['owner', 'technician'],
   'venue-view': ['venue_contact'],
 };
 

@@ -1,6 +1,7 @@
 // A company with rows in every tenant-owned table: people of every role, a technician's profile, a venue
 // contact, an open invitation, settings, calls (one down, one assigned) with their timeline, downtime,
-// outbox messages and a photo, and audit entries. Rows are arranged as the owner role or through the real
+// outbox messages and a photo, audit entries, and the bench: a board with its parts list, that board fitted in the
+// first game with its cabinet's temperatures, a template, a job on the board with a reading, a part used and a photo. Rows are arranged as the owner role or through the real
 // query and service functions inside the company's row-level-security scope.
 import { randomBytes } from 'node:crypto';
 import { mkdtemp, rm } from 'node:fs/promises';
@@ -14,7 +15,18 @@ import { getSettings } from '@bumperline/db/queries/settings';
 import { recordAudit } from '@bumperline/db/queries/audit';
 import { insertInvitation } from '@bumperline/db/queries/team';
 import { linkVenueContact } from '@bumperline/db/queries/venue-contacts';
-import { technicianProfiles } from '@bumperline/db/schema/index';
+import {
+  benchJobPartsUsed,
+  benchJobPhotos,
+  benchJobs,
+  benchTemplates,
+  boardInstances,
+  boardParts,
+  cabinetProfiles,
+  modelBoards,
+  partReadings,
+  technicianProfiles,
+} from '@bumperline/db/schema/index';
 import { newToken } from '@bumperline/api/auth/tokens';
 import { preparePhoto, savePhoto } from '@bumperline/api/services/photo-intake';
 import { folderPhotoStore, type PhotoStore } from '@bumperline/api/services/photo-store';
@@ -42,6 +54,110 @@ export interface FullCompany extends CompanyFixture {
   assignedCallId: string;
   /** A photo on the down call, stored in the given photo store. */
   photoId: string;
+  bench: BenchRows;
+}
+
+/** The bench rows of a full company (arranged as the owner role). */
+export interface BenchRows {
+  /** A power-supply board of the company's model, with a parts list of one resistor (R1) and one fuse (F1). */
+  modelBoardId: string;
+  resistorPartId: string;
+  fusePartId: string;
+  /** That board fitted in the first game. */
+  boardInstanceId: string;
+  templateId: string;
+  /** A job in progress on the board, with one reading of R1, a part used and a photo record. */
+  benchJobId: string;
+}
+
+async function createBenchRows(db: TestDatabase, company: CompanyFixture, technicianId: string): Promise<BenchRows> {
+  const { tenantId } = company;
+  const [board] = await db.owner
+    .insert(modelBoards)
+    .values({ tenantId, modelId: company.modelId, name: 'Power supply', partNumber: 'PS-100' })
+    .returning({ id: modelBoards.id });
+  const boardId = board!.id;
+  const parts = await db.owner
+    .insert(boardParts)
+    .values([
+      { tenantId, boardId, position: 1, designator: 'R1', kind: 'resistor', value: '600', tolerance: '10%', rating: '1/2 W' },
+      { tenantId, boardId, position: 2, designator: 'F1', kind: 'fuse', value: 'T2.5A 250V' },
+    ])
+    .returning({ id: boardParts.id, designator: boardParts.designator });
+  const resistorPartId = parts.find((p) => p.designator === 'R1')!.id;
+  const fusePartId = parts.find((p) => p.designator === 'F1')!.id;
+  const [instance] = await db.owner
+    .insert(boardInstances)
+    .values({ tenantId, boardId, gameId: company.gameIds[0]!, serial: 'PS-0001', dateCode: '8934', madeOn: '1989-08-21' })
+    .returning({ id: boardInstances.id });
+  const boardInstanceId = instance!.id;
+  await db.owner.insert(cabinetProfiles).values({
+    tenantId,
+    gameId: company.gameIds[0]!,
+    slices: [
+      { hours: 4, temperatureC: 35 },
+      { hours: 6, temperatureC: 45 },
+    ],
+  });
+  const steps = [
+    {
+      key: 'measure',
+      title: 'Measure the resistors',
+      instructions: 'Measure each resistor against the parts list.',
+      record: 'readings' as const,
+      partKinds: ['resistor' as const],
+      designators: [],
+      cautions: [],
+    },
+  ];
+  const [template] = await db.owner
+    .insert(benchTemplates)
+    .values({ tenantId, name: 'Power supply check', steps })
+    .returning({ id: benchTemplates.id });
+  const [job] = await db.owner
+    .insert(benchJobs)
+    .values({
+      tenantId,
+      boardInstanceId,
+      templateId: template!.id,
+      templateName: 'Power supply check',
+      steps,
+      origin: 'game',
+      openedBy: technicianId,
+      draft: { steps: {}, partsUsed: [] },
+    })
+    .returning({ id: benchJobs.id });
+  const benchJobId = job!.id;
+  await db.owner.insert(partReadings).values({
+    tenantId,
+    boardInstanceId,
+    partId: resistorPartId,
+    benchJobId,
+    measuredText: '570',
+    measured: 570,
+    unit: 'Ω',
+    verdict: 'pass',
+    min: 540,
+    max: 660,
+    deviationPercent: -5,
+    takenBy: technicianId,
+  });
+  await db.owner
+    .insert(benchJobPartsUsed)
+    .values({ tenantId, jobId: benchJobId, partId: fusePartId, description: 'T2.5A 250V fuse', quantity: 1 });
+  await db.owner.insert(benchJobPhotos).values({
+    tenantId,
+    jobId: benchJobId,
+    stepKey: 'measure',
+    storageKey: `bench/${benchJobId}/photo.jpg`,
+    thumbKey: `bench/${benchJobId}/thumb.jpg`,
+    contentType: 'image/jpeg',
+    bytes: 1000,
+    width: 40,
+    height: 30,
+    uploadedBy: technicianId,
+  });
+  return { modelBoardId: boardId, resistorPartId, fusePartId, boardInstanceId, templateId: template!.id, benchJobId };
 }
 
 const randomPhone = () => `+1312555${String(1000 + (randomBytes(2).readUInt16BE() % 9000))}`;
@@ -97,8 +213,11 @@ export async function createFullCompany(db: TestDatabase, name: string, photos: 
     savePhoto(tx, photos, { callId: downCallId, photo, uploadedBy: 'reporter', actorLabel: 'reporter' }),
   );
 
+  const bench = await createBenchRows(db, company, technician.id);
+
   return {
     ...company,
+    bench,
     dispatcher: { id: dispatcher.id, email: dispatcher.email },
     technician: { id: technician.id, email: technician.email, phone },
     venueContact: { id: venueContact.id, email: venueContact.email },

@@ -29,6 +29,16 @@ export const permissions = {
   /** Whom the call's messages went to (a reporter's phone, a venue's e-mail) in full; others see them masked. */
   'calls:contacts': ['owner', 'dispatcher'],
   'settings:manage': ['owner'],
+  /** Parts lists, boards in games and their readings, bench-job templates and jobs: what the bench works from. */
+  'bench:read': ['owner', 'dispatcher', 'technician'],
+  /** Models' boards and their parts lists (technicians keep them as much as the office). */
+  'parts-lists:write': ['owner', 'dispatcher', 'technician'],
+  /** Boards fitted in games: serial, date code, last recap; a cabinet's temperature through the day. */
+  'boards:write': ['owner', 'dispatcher', 'technician'],
+  /** Open, work on and finish bench jobs. */
+  'bench:work': ['owner', 'dispatcher', 'technician'],
+  /** Bench-job templates: their steps and cautions. */
+  'bench-templates:write': ['owner', 'technician'],
   'venue-view': ['venue_contact'],
 } as const satisfies Record<string, readonly Role[]>;
 

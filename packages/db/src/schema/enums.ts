@@ -8,6 +8,7 @@ import { check, text, type AnyPgColumn } from 'drizzle-orm/pg-core';
 import { roles } from '@bumperline/contracts/roles';
 import { gameKinds, gameStatuses } from '@bumperline/contracts/games';
 import { callStates, problemKinds, severities } from '@bumperline/contracts/calls';
+import { benchJobOrigins, benchJobStates, partKinds, readingVerdicts } from '@bumperline/contracts/bench-vocabulary';
 
 type Values = readonly [string, ...string[]];
 
@@ -35,3 +36,8 @@ export const callState = valueSet(callStates);
 export const callSource = valueSet(['game_tag', 'venue_view', 'staff']);
 export const outboxChannel = valueSet(['sms', 'email']);
 export const outboxStatus = valueSet(['pending', 'sending', 'sent', 'failed', 'blocked']);
+
+export const partKind = valueSet(partKinds);
+export const benchJobState = valueSet(benchJobStates);
+export const benchJobOrigin = valueSet(benchJobOrigins);
+export const readingVerdict = valueSet(readingVerdicts);

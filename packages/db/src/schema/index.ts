@@ -10,3 +10,7 @@ export * from './calls.ts';
 export * from './settings.ts';
 export * from './technicians.ts';
 export * from './messaging.ts';
+export * from './parts-lists.ts';
+export * from './boards.ts';
+export * from './bench-jobs.ts';
+export * from './part-readings.ts';
