@@ -30,6 +30,16 @@ import {
   tagRegenerated,
 } from '@bumperline/contracts/games';
 import { health } from '@bumperline/contracts/health';
+import { boardPartsList, modelBoard, modelBoardList, partsListsOverview } from '@bumperline/contracts/parts-lists';
+import { boardInstance, boardPage, cabinetProfile, gameBoards, recapFleet } from '@bumperline/contracts/boards';
+import {
+  benchDraftSaved,
+  benchJob,
+  benchJobPage,
+  benchPhotoUploaded,
+  benchTemplate,
+  benchTemplateList,
+} from '@bumperline/contracts/bench-jobs';
 import { companySettings } from '@bumperline/contracts/settings';
 import { invitationAccepted, invitationInfo, invitationSent, memberRoleChanged, team } from '@bumperline/contracts/team';
 import { venueReportOpened, venueView } from '@bumperline/contracts/venue-view';
@@ -48,6 +58,7 @@ import {
   unique,
   type TagReport,
 } from '../support/fresh-rows.ts';
+import { benchPhotoOnce, emptyBenchDraft, freshBenchJob, sendBenchPhoto } from '../support/bench-rows.ts';
 import { appWithFullCompany, type FullCompany } from '../support/full-company.ts';
 import { listRoutes } from '../support/route-list.ts';
 
@@ -60,7 +71,7 @@ interface Endpoint {
   probe: (agent: Agent) => PromiseLike<Response>;
   status: number;
   /** The response schema from the contracts; or no body (204), or a page or a file rather than JSON. */
-  answer: z.ZodType | 'no-content' | 'html' | 'image';
+  answer: z.ZodType | 'no-content' | 'html' | 'image' | 'csv' | 'pdf';
 }
 
 let t: TestApp;
@@ -334,6 +345,217 @@ const endpoints: Record<string, Endpoint> = {
         .send({ maker: 'Probeworks', title: unique('Model'), kind: 'darts' }),
   },
 
+  // Models' boards and their parts lists.
+  'GET /api/parts-lists': { as: 'owner', status: 200, answer: partsListsOverview, probe: (a) => a.get('/api/parts-lists') },
+  'GET /api/models/:modelId/boards': {
+    as: 'owner',
+    status: 200,
+    answer: modelBoardList,
+    probe: (a) => a.get(`/api/models/${company.modelId}/boards`),
+  },
+  'POST /api/models/:modelId/boards': {
+    as: 'owner',
+    status: 201,
+    answer: modelBoard,
+    probe: (a) =>
+      a
+        .post(`/api/models/${company.modelId}/boards`)
+        .set(JSON_HEADERS)
+        .send({ name: unique('Sound board'), partNumber: 'SB-2' }),
+  },
+  'GET /api/boards/:boardId': {
+    as: 'owner',
+    status: 200,
+    answer: boardPartsList,
+    probe: (a) => a.get(`/api/boards/${company.bench.modelBoardId}`),
+  },
+  'PATCH /api/boards/:boardId': {
+    as: 'owner',
+    status: 200,
+    answer: modelBoard,
+    probe: (a) => a.patch(`/api/boards/${company.bench.modelBoardId}`).set(JSON_HEADERS).send({ partNumber: 'PS-100A' }),
+  },
+  'PUT /api/boards/:boardId/parts': {
+    as: 'owner',
+    status: 200,
+    answer: boardPartsList,
+    probe: async (a) => {
+      const { body } = await a.get(`/api/boards/${company.bench.modelBoardId}`);
+      return a
+        .put(`/api/boards/${company.bench.modelBoardId}/parts`)
+        .set(JSON_HEADERS)
+        .send({ version: body.version, parts: body.parts });
+    },
+  },
+  'GET /api/boards/:boardId/parts.csv': {
+    as: 'owner',
+    status: 200,
+    answer: 'csv',
+    probe: (a) => a.get(`/api/boards/${company.bench.modelBoardId}/parts.csv`),
+  },
+
+  // Boards fitted in games, cabinet profiles, the recap list.
+  'GET /api/games/:gameId/boards': {
+    as: 'owner',
+    status: 200,
+    answer: gameBoards,
+    probe: (a) => a.get(`/api/games/${company.gameIds[0]}/boards`),
+  },
+  'POST /api/games/:gameId/boards': {
+    as: 'owner',
+    status: 201,
+    answer: boardInstance,
+    probe: (a) =>
+      a
+        .post(`/api/games/${company.gameIds[0]}/boards`)
+        .set(JSON_HEADERS)
+        .send({ boardId: company.bench.modelBoardId, serial: unique('PS'), dateCode: '2012' }),
+  },
+  'GET /api/board-instances/:id': {
+    as: 'owner',
+    status: 200,
+    answer: boardPage,
+    probe: (a) => a.get(`/api/board-instances/${company.bench.boardInstanceId}`),
+  },
+  'PATCH /api/board-instances/:id': {
+    as: 'owner',
+    status: 200,
+    answer: boardInstance,
+    probe: async (a) => {
+      const { body } = await a.get(`/api/board-instances/${company.bench.boardInstanceId}`);
+      return a
+        .patch(`/api/board-instances/${company.bench.boardInstanceId}`)
+        .set(JSON_HEADERS)
+        .send({ version: body.instance.version, lastRecapOn: '2015-06-01' });
+    },
+  },
+  'GET /api/games/:gameId/cabinet-profile': {
+    as: 'owner',
+    status: 200,
+    answer: cabinetProfile,
+    probe: (a) => a.get(`/api/games/${company.gameIds[1]}/cabinet-profile`),
+  },
+  'PUT /api/games/:gameId/cabinet-profile': {
+    as: 'owner',
+    status: 200,
+    answer: cabinetProfile,
+    probe: (a) =>
+      a
+        .put(`/api/games/${company.gameIds[0]}/cabinet-profile`)
+        .set(JSON_HEADERS)
+        .send({ slices: [{ hours: 12, temperatureC: 40 }] }),
+  },
+  'GET /api/recap-due': { as: 'owner', status: 200, answer: recapFleet, probe: (a) => a.get('/api/recap-due') },
+
+  // Bench-job templates and bench jobs.
+  'GET /api/bench-templates': { as: 'owner', status: 200, answer: benchTemplateList, probe: (a) => a.get('/api/bench-templates') },
+  'POST /api/bench-templates': {
+    as: 'owner',
+    status: 201,
+    answer: benchTemplate,
+    probe: (a) =>
+      a
+        .post('/api/bench-templates')
+        .set(JSON_HEADERS)
+        .send({
+          name: unique('Template'),
+          steps: [{ key: 'measure', title: 'Measure', record: 'readings', partKinds: ['resistor'], cautions: [] }],
+        }),
+  },
+  'GET /api/bench-templates/:id': {
+    as: 'owner',
+    status: 200,
+    answer: benchTemplate,
+    probe: (a) => a.get(`/api/bench-templates/${company.bench.templateId}`),
+  },
+  'PUT /api/bench-templates/:id': {
+    as: 'owner',
+    status: 200,
+    answer: benchTemplate,
+    probe: async (a) => {
+      const { body } = await a.get(`/api/bench-templates/${company.bench.templateId}`);
+      return a
+        .put(`/api/bench-templates/${company.bench.templateId}`)
+        .set(JSON_HEADERS)
+        .send({ version: body.version, name: body.name, description: 'Edited', steps: body.steps });
+    },
+  },
+  'GET /api/bench-templates/:id/sheet.pdf': {
+    as: 'owner',
+    status: 200,
+    answer: 'pdf',
+    probe: (a) => a.get(`/api/bench-templates/${company.bench.templateId}/sheet.pdf`).query({ boardId: company.bench.modelBoardId }),
+  },
+  'GET /api/bench-jobs': { as: 'owner', status: 200, answer: benchJobPage, probe: (a) => a.get('/api/bench-jobs') },
+  'POST /api/bench-jobs': {
+    as: 'owner',
+    status: 201,
+    answer: benchJob,
+    probe: (a) =>
+      a
+        .post('/api/bench-jobs')
+        .set(JSON_HEADERS)
+        .send({ boardInstanceId: company.bench.boardInstanceId, templateId: company.bench.templateId, serviceCallId: company.downCallId }),
+  },
+  'GET /api/bench-jobs/:id': {
+    as: 'owner',
+    status: 200,
+    answer: benchJob,
+    probe: (a) => a.get(`/api/bench-jobs/${company.bench.benchJobId}`),
+  },
+  'PUT /api/bench-jobs/:id/draft': {
+    as: 'owner',
+    status: 200,
+    answer: benchDraftSaved,
+    probe: async (a) =>
+      a
+        .put(`/api/bench-jobs/${await freshBenchJob(t.db, company)}/draft`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, draft: emptyBenchDraft() }),
+  },
+  // Finished with a reading, so the answer carries what it recorded.
+  'POST /api/bench-jobs/:id/finish': {
+    as: 'owner',
+    status: 200,
+    answer: benchJob,
+    probe: async (a) => {
+      const id = await freshBenchJob(t.db, company);
+      const draft = emptyBenchDraft();
+      draft.steps.measure = {
+        ...draft.steps.measure,
+        done: true,
+        readings: { [company.bench.resistorPartId]: { text: '570', inCircuit: false } },
+      };
+      await a.put(`/api/bench-jobs/${id}/draft`).set(JSON_HEADERS).send({ version: 1, draft });
+      return a.post(`/api/bench-jobs/${id}/finish`).set(JSON_HEADERS).send({ version: 2 });
+    },
+  },
+  'POST /api/bench-jobs/:id/photos': { as: 'owner', status: 201, answer: benchPhotoUploaded, probe: (a) => sendBenchPhoto(a, company) },
+  'GET /api/bench-jobs/:id/photos/:photoId': {
+    as: 'owner',
+    status: 200,
+    answer: 'image',
+    probe: async (a) => {
+      const { jobId, photoId } = await benchPhotoOnce(a, company);
+      return a.get(`/api/bench-jobs/${jobId}/photos/${photoId}`);
+    },
+  },
+  'GET /api/bench-jobs/:id/photos/:photoId/thumb': {
+    as: 'owner',
+    status: 200,
+    answer: 'image',
+    probe: async (a) => {
+      const { jobId, photoId } = await benchPhotoOnce(a, company);
+      return a.get(`/api/bench-jobs/${jobId}/photos/${photoId}/thumb`);
+    },
+  },
+  'GET /api/bench-jobs/:id/sheet.pdf': {
+    as: 'owner',
+    status: 200,
+    answer: 'pdf',
+    probe: (a) => a.get(`/api/bench-jobs/${company.bench.benchJobId}/sheet.pdf`),
+  },
+
   // Service calls.
   'GET /api/calls': { as: 'owner', status: 200, answer: callPage, probe: (a) => a.get('/api/calls') },
   'POST /api/calls': {
@@ -430,6 +652,8 @@ function check(res: Response, e: Endpoint): string {
   if (e.answer === 'no-content') return res.text ? `a body where none was agreed: ${res.text}` : 'as agreed';
   if (e.answer === 'html') return type.startsWith('text/html') ? 'as agreed' : `content type ${type}, not HTML`;
   if (e.answer === 'image') return type.startsWith('image/') ? 'as agreed' : `content type ${type}, not an image`;
+  if (e.answer === 'csv') return type.startsWith('text/csv') ? 'as agreed' : `content type ${type}, not CSV`;
+  if (e.answer === 'pdf') return type.startsWith('application/pdf') ? 'as agreed' : `content type ${type}, not PDF`;
   if (!type.startsWith('application/json')) return `content type ${type}, not JSON`;
   return conformance(e.answer, res.body);
 }

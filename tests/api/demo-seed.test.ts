@@ -4,6 +4,7 @@ import { sql } from 'drizzle-orm';
 import { seedDemo } from '@bumperline/db/demo/seed';
 import { demoCompany, secondCompany } from '@bumperline/db/demo/scenario';
 import { withScope } from '@bumperline/db/client';
+import { checkPartsList } from '@bumperline/domain/components/parts-list-entry';
 import { freshDatabase, type TestDatabase } from '../support/database.ts';
 
 let db: TestDatabase;
@@ -41,6 +42,40 @@ describe('demo scenario', () => {
       tx.execute(sql`select count(*)::int as n, count(*) filter (where tenant_id = ${demoCompany.id})::int as leaked from venues`),
     );
     expect(seen.rows[0]).toEqual({ n: 3, leaked: 0 });
+  });
+
+  it('carries parts lists for several models, each of which passes the parts-list check', async () => {
+    interface Row extends Record<string, unknown> {
+      title: string;
+      name: string;
+      designator: string;
+      kind: string;
+      value: string;
+      tolerance: string;
+      rating: string;
+      ratedTemperatureC: number | null;
+      ratedLifeHours: number | null;
+      notes: string;
+    }
+    const rows = (
+      await db.owner.execute<Row>(sql`
+        select m.title, b.name, p.designator, p.kind, p.value, p.tolerance, p.rating,
+               p.rated_temperature_c as "ratedTemperatureC", p.rated_life_hours as "ratedLifeHours", p.notes
+        from board_parts p
+        join model_boards b on b.tenant_id = p.tenant_id and b.id = p.board_id
+        join game_models m on m.tenant_id = b.tenant_id and m.id = b.model_id
+        where p.tenant_id = ${demoCompany.id} and p.removed_at is null
+        order by m.title, b.name, p.position`)
+    ).rows;
+    const lists = new Map<string, typeof rows>();
+    for (const r of rows) {
+      const key = `${r.title} · ${r.name}`;
+      lists.set(key, [...(lists.get(key) ?? []), r]);
+    }
+    const powerSupplies = [...lists].filter(([key, parts]) => key.endsWith('· Power supply') && parts.length >= 40 && parts.length <= 80);
+    expect(powerSupplies.length).toBeGreaterThanOrEqual(3);
+    expect([...lists.keys()].some((key) => !key.endsWith('· Power supply'))).toBe(true);
+    for (const [key, parts] of lists) expect({ key, problems: checkPartsList(parts) }).toEqual({ key, problems: [] });
   });
 
   it('every open downtime interval belongs to a game that is down', async () => {

@@ -19,6 +19,7 @@ import {
   unique,
   type TagReport,
 } from '../support/fresh-rows.ts';
+import { benchPhotoOnce, emptyBenchDraft, freshBenchJob, sendBenchPhoto } from '../support/bench-rows.ts';
 import { appWithFullCompany, type FullCompany } from '../support/full-company.ts';
 import { listRoutes, type ListedRoute } from '../support/route-list.ts';
 
@@ -324,6 +325,179 @@ const routes: Record<string, RouteCase> = {
         .post('/api/models')
         .set(JSON_HEADERS)
         .send({ maker: 'Probeworks', title: unique('Model'), kind: 'darts' }),
+  },
+
+  // Models' boards and their parts lists.
+  'GET /api/parts-lists': { access: 'bench:read', ok: 200, probe: (c) => c.agent.get('/api/parts-lists') },
+  'GET /api/models/:modelId/boards': {
+    access: 'bench:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/models/${company.modelId}/boards`),
+  },
+  'POST /api/models/:modelId/boards': {
+    access: 'parts-lists:write',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post(`/api/models/${company.modelId}/boards`)
+        .set(JSON_HEADERS)
+        .send({ name: unique('Board') }),
+  },
+  'GET /api/boards/:boardId': { access: 'bench:read', ok: 200, probe: (c) => c.agent.get(`/api/boards/${company.bench.modelBoardId}`) },
+  'PATCH /api/boards/:boardId': {
+    access: 'parts-lists:write',
+    ok: 200,
+    probe: (c) => c.agent.patch(`/api/boards/${company.bench.modelBoardId}`).set(JSON_HEADERS).send({ notes: 'Check the bridge' }),
+  },
+  'PUT /api/boards/:boardId/parts': {
+    access: 'parts-lists:write',
+    ok: 200,
+    // The list as it stands, saved again at its current version.
+    probe: async (c) => {
+      const { body } = await agents.owner.get(`/api/boards/${company.bench.modelBoardId}`);
+      return c.agent
+        .put(`/api/boards/${company.bench.modelBoardId}/parts`)
+        .set(JSON_HEADERS)
+        .send({ version: body.version, parts: body.parts });
+    },
+  },
+  'GET /api/boards/:boardId/parts.csv': {
+    access: 'bench:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/boards/${company.bench.modelBoardId}/parts.csv`),
+  },
+
+  // Boards fitted in games, cabinet profiles, the recap list.
+  'GET /api/games/:gameId/boards': { access: 'bench:read', ok: 200, probe: (c) => c.agent.get(`/api/games/${company.gameIds[0]}/boards`) },
+  'POST /api/games/:gameId/boards': {
+    access: 'boards:write',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post(`/api/games/${company.gameIds[0]}/boards`)
+        .set(JSON_HEADERS)
+        .send({ boardId: company.bench.modelBoardId, serial: unique('PS'), dateCode: '9112' }),
+  },
+  'GET /api/board-instances/:id': {
+    access: 'bench:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/board-instances/${company.bench.boardInstanceId}`),
+  },
+  'PATCH /api/board-instances/:id': {
+    access: 'boards:write',
+    ok: 200,
+    probe: async (c) => {
+      const { body } = await agents.owner.get(`/api/board-instances/${company.bench.boardInstanceId}`);
+      return c.agent
+        .patch(`/api/board-instances/${company.bench.boardInstanceId}`)
+        .set(JSON_HEADERS)
+        .send({ version: body.instance.version, notes: unique('Reflowed') });
+    },
+  },
+  'GET /api/games/:gameId/cabinet-profile': {
+    access: 'bench:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/games/${company.gameIds[0]}/cabinet-profile`),
+  },
+  'PUT /api/games/:gameId/cabinet-profile': {
+    access: 'boards:write',
+    ok: 200,
+    probe: (c) =>
+      c.agent
+        .put(`/api/games/${company.gameIds[0]}/cabinet-profile`)
+        .set(JSON_HEADERS)
+        .send({
+          slices: [
+            { hours: 4, temperatureC: 35 },
+            { hours: 6, temperatureC: 45 },
+          ],
+        }),
+  },
+  'GET /api/recap-due': { access: 'bench:read', ok: 200, probe: (c) => c.agent.get('/api/recap-due') },
+
+  // Bench-job templates and bench jobs.
+  'GET /api/bench-templates': { access: 'bench:read', ok: 200, probe: (c) => c.agent.get('/api/bench-templates') },
+  'POST /api/bench-templates': {
+    access: 'bench-templates:write',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post('/api/bench-templates')
+        .set(JSON_HEADERS)
+        .send({ name: unique('Template'), steps: [{ key: 'inspect', title: 'Inspect', record: 'check' }] }),
+  },
+  'GET /api/bench-templates/:id': {
+    access: 'bench:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/bench-templates/${company.bench.templateId}`),
+  },
+  'PUT /api/bench-templates/:id': {
+    access: 'bench-templates:write',
+    ok: 200,
+    // The template as it stands, saved again at its current version.
+    probe: async (c) => {
+      const { body } = await agents.owner.get(`/api/bench-templates/${company.bench.templateId}`);
+      return c.agent
+        .put(`/api/bench-templates/${company.bench.templateId}`)
+        .set(JSON_HEADERS)
+        .send({ version: body.version, name: body.name, description: body.description, steps: body.steps });
+    },
+  },
+  'GET /api/bench-templates/:id/sheet.pdf': {
+    access: 'bench:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/bench-templates/${company.bench.templateId}/sheet.pdf`),
+  },
+  'GET /api/bench-jobs': { access: 'bench:read', ok: 200, probe: (c) => c.agent.get('/api/bench-jobs') },
+  'POST /api/bench-jobs': {
+    access: 'bench:work',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post('/api/bench-jobs')
+        .set(JSON_HEADERS)
+        .send({ boardInstanceId: company.bench.boardInstanceId, templateId: company.bench.templateId }),
+  },
+  'GET /api/bench-jobs/:id': { access: 'bench:read', ok: 200, probe: (c) => c.agent.get(`/api/bench-jobs/${company.bench.benchJobId}`) },
+  'PUT /api/bench-jobs/:id/draft': {
+    access: 'bench:work',
+    ok: 200,
+    probe: async (c) =>
+      c.agent
+        .put(`/api/bench-jobs/${await freshBenchJob(t.db, company)}/draft`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, draft: emptyBenchDraft() }),
+  },
+  'POST /api/bench-jobs/:id/finish': {
+    access: 'bench:work',
+    ok: 200,
+    probe: async (c) =>
+      c.agent
+        .post(`/api/bench-jobs/${await freshBenchJob(t.db, company)}/finish`)
+        .set(JSON_HEADERS)
+        .send({ version: 1 }),
+  },
+  'POST /api/bench-jobs/:id/photos': { access: 'bench:work', ok: 201, probe: (c) => sendBenchPhoto(c.agent, company) },
+  'GET /api/bench-jobs/:id/photos/:photoId': {
+    access: 'bench:read',
+    ok: 200,
+    probe: async (c) => {
+      const { jobId, photoId } = await benchPhotoOnce(agents.owner, company);
+      return c.agent.get(`/api/bench-jobs/${jobId}/photos/${photoId}`);
+    },
+  },
+  'GET /api/bench-jobs/:id/photos/:photoId/thumb': {
+    access: 'bench:read',
+    ok: 200,
+    probe: async (c) => {
+      const { jobId, photoId } = await benchPhotoOnce(agents.owner, company);
+      return c.agent.get(`/api/bench-jobs/${jobId}/photos/${photoId}/thumb`);
+    },
+  },
+  'GET /api/bench-jobs/:id/sheet.pdf': {
+    access: 'bench:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/bench-jobs/${company.bench.benchJobId}/sheet.pdf`),
   },
 
   // Service calls.

@@ -135,6 +135,8 @@ describe('query plans at scale, as the app role under row-level security', () =>
     ['owner', '/api/venues/:venue'],
     ['dispatcher', '/api/technicians'],
     ['owner', '/api/team'],
+    ['technician', '/api/bench-templates'],
+    ['technician', '/api/bench-jobs?state=in_progress'],
   ];
   const resolve = (path: string) => path.replace(':call', sample.callId).replace(':game', sample.gameId).replace(':venue', sample.venueId);
 

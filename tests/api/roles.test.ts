@@ -21,6 +21,23 @@ describe('roles', () => {
     // Each permission has a route that needs it; every role must get 2xx exactly when the table allows.
     const ownerAgent = await signedInAgent(t, people.owner);
     const call = await ownerAgent.post('/api/calls').set(JSON_HEADERS).send({ gameId: company.gameIds[1], problem: 'other' }).expect(201);
+    // A board fitted in a game and a bench-job template, to open bench jobs on.
+    const modelBoard = await ownerAgent
+      .post(`/api/models/${company.modelId}/boards`)
+      .set(JSON_HEADERS)
+      .send({ name: 'Probe power supply' })
+      .expect(201);
+    const fitted = await ownerAgent
+      .post(`/api/games/${company.gameIds[1]}/boards`)
+      .set(JSON_HEADERS)
+      .send({ boardId: modelBoard.body.id, serial: 'PS-PROBE' })
+      .expect(201);
+    const benchStep = { key: 'inspect', title: 'Inspect the board', record: 'check' };
+    const template = await ownerAgent
+      .post('/api/bench-templates')
+      .set(JSON_HEADERS)
+      .send({ name: 'Probe template', steps: [benchStep] })
+      .expect(201);
     // calls:contacts guards no route: it decides whether a call's message recipients show in full
     // (tests/api/call-contacts.test.ts walks it per role).
     const probes: Record<Exclude<Permission, 'calls:contacts'>, (a: ReturnType<typeof request.agent>) => request.Test> = {
@@ -49,6 +66,24 @@ describe('roles', () => {
       'calls:work': (a) => a.post(`/api/calls/${call.body.id}/notes`).set(JSON_HEADERS).send({ note: 'probe' }),
       'settings:manage': (a) => a.patch('/api/settings').set(JSON_HEADERS).send({ warnBeforeMinutes: 30 }),
       'venue-view': (a) => a.get('/api/venue-view'),
+      'bench:read': (a) => a.get('/api/parts-lists'),
+      'parts-lists:write': (a) =>
+        a
+          .post(`/api/models/${company.modelId}/boards`)
+          .set(JSON_HEADERS)
+          .send({ name: `Probe board ${Math.random()}` }),
+      'bench:work': (a) =>
+        a.post('/api/bench-jobs').set(JSON_HEADERS).send({ boardInstanceId: fitted.body.id, templateId: template.body.id }),
+      'bench-templates:write': (a) =>
+        a
+          .post('/api/bench-templates')
+          .set(JSON_HEADERS)
+          .send({ name: `Probe template ${Math.random()}`, steps: [benchStep] }),
+      'boards:write': (a) =>
+        a
+          .put(`/api/games/${company.gameIds[0]}/cabinet-profile`)
+          .set(JSON_HEADERS)
+          .send({ slices: [{ hours: 8, temperatureC: 40 }] }),
     };
     for (const role of roles) {
       const agent = await signedInAgent(t, people[role]);

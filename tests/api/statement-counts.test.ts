@@ -45,9 +45,17 @@ describe('statements per request', () => {
     ['owner', '/api/settings', 5],
     ['technician', '/api/calls?state=open', 5],
     ['venue_contact', '/api/venue-view', 9],
+    ['technician', '/api/bench-templates', 5],
+    ['technician', '/api/bench-jobs?state=in_progress', 5],
+    // The job, its board's parts list, its photos.
+    ['technician', '/api/bench-jobs/:benchJob', 7],
   ];
   const resolve = (path: string) =>
-    path.replace(':call', f.company.downCallId).replace(':game', f.company.gameIds[0]!).replace(':venue', f.company.venueIds[0]!);
+    path
+      .replace(':benchJob', f.company.bench.benchJobId)
+      .replace(':call', f.company.downCallId)
+      .replace(':game', f.company.gameIds[0]!)
+      .replace(':venue', f.company.venueIds[0]!);
 
   it.each(cases)('%s GET %s sends at most %i statements', async (role, path, ceiling) => {
     const sent = await count(f.agents[role], resolve(path));

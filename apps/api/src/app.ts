@@ -36,6 +36,10 @@ import type { PhotoStore } from './services/photo-store.ts';
 import { smsWebhookRouter } from './routes/sms-webhook.ts';
 import { publicTagsRouter } from './routes/public-tags.ts';
 import { tagSheetRouter } from './routes/tag-sheet.ts';
+import { boardsRouter } from './routes/boards.ts';
+import { partsListsRouter } from './routes/parts-lists.ts';
+import { benchTemplatesRouter } from './routes/bench-templates.ts';
+import { benchJobsRouter } from './routes/bench-jobs.ts';
 
 export interface AppDeps {
   db: Db;
@@ -96,6 +100,8 @@ export function createApp(deps: AppDeps): Express {
   // Public game-tag pages: no sign-in, plain HTML forms that work without JavaScript.
   app.use(publicTagsRouter({ db: deps.db, photos: deps.photos, appOrigin: deps.appOrigin }));
 
+  // A whole parts list is saved in one request: a few hundred rows outgrow the general limit.
+  app.use('/api/boards/:boardId/parts', express.json({ limit: '1mb' }));
   app.use(express.json({ limit: '100kb' }));
   app.use(refuseNulBytes);
   app.use(loadActor(deps.db, sessionCookieReader({ secret: deps.authSecret, secureCookies })));
@@ -127,6 +133,10 @@ export function createApp(deps: AppDeps): Express {
   api.use('/settings', settingsRouter(scoped));
   api.use('/venue-view', venueViewRouter({ scoped, appOrigin: deps.appOrigin }));
   api.use(tagSheetRouter({ scoped, appOrigin: deps.appOrigin }));
+  api.use(boardsRouter(scoped));
+  api.use(partsListsRouter(scoped));
+  api.use('/bench-templates', benchTemplatesRouter(scoped));
+  api.use('/bench-jobs', benchJobsRouter({ scoped, photos: deps.photos }));
   api.use(notFoundHandler);
   app.use('/api', api);
 

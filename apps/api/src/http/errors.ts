@@ -39,8 +39,9 @@ export class ConflictError extends HttpError {
   constructor(
     detail: string,
     readonly current?: unknown,
+    errors?: { field: string; message: string }[],
   ) {
-    super(409, 'Conflict', detail, undefined, 'conflict');
+    super(409, 'Conflict', detail, errors, 'conflict');
   }
 }
 

@@ -33,7 +33,7 @@ function fromWorkflow(err: unknown): HttpError | undefined {
   if (err instanceof NotFound) return new NotFoundError(err.what);
   if (err instanceof InvalidInput) return new ValidationError(err.fields);
   if (err instanceof NotAllowed) return new ForbiddenError(err.message);
-  if (err instanceof Conflict) return new ConflictError(err.message, err.current);
+  if (err instanceof Conflict) return new ConflictError(err.message, err.current, err.fields);
   return undefined;
 }
 

@@ -25,11 +25,13 @@ export class NotAllowed extends Error {
   }
 }
 
-/** The thing changed under the request (a newer version, or a state that forbids the step); `current` is how it stands now. */
+/** The thing changed under the request (a newer version, or a state that forbids the step); `current` is how it stands now,
+ * `fields` the request's fields it concerns (a stale `version`). */
 export class Conflict extends Error {
   constructor(
     message: string,
     readonly current?: unknown,
+    readonly fields?: { field: string; message: string }[],
   ) {
     super(message);
     this.name = 'Conflict';

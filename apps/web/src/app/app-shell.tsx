@@ -1,7 +1,20 @@
 // The signed-in frame: our mark, the sections this role may open, the company switcher, sign out.
 import { NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
-import { Building2, Gauge, History, LogOut, MapPinned, Users, Joystick, Siren, Settings } from 'lucide-react';
+import {
+  Hourglass,
+  Building2,
+  CircuitBoard,
+  ClipboardList,
+  Gauge,
+  History,
+  LogOut,
+  MapPinned,
+  Users,
+  Joystick,
+  Siren,
+  Settings,
+} from 'lucide-react';
 import { can, roleLabels, type Permission } from '@bumperline/contracts/roles';
 import { useMe } from '../api/me.ts';
 import { useSwitchCompany } from '../api/switch-company.ts';
@@ -13,6 +26,9 @@ const sections: { to: string; label: string; icon: typeof Gauge; needs?: Permiss
   { to: paths.calls, label: 'Calls', icon: Siren, needs: 'calls:read' },
   { to: paths.venues, label: 'Venues', icon: MapPinned, needs: 'venues:read' },
   { to: paths.games, label: 'Games', icon: Joystick, needs: 'games:read' },
+  { to: paths.bench, label: 'Bench', icon: CircuitBoard, needs: 'bench:read' },
+  { to: paths.partsLists, label: 'Parts lists', icon: ClipboardList, needs: 'bench:read' },
+  { to: paths.recapDue, label: 'Recap due', icon: Hourglass, needs: 'bench:read' },
   { to: paths.team, label: 'Team', icon: Users, needs: 'team:read' },
   { to: paths.activity, label: 'Activity', icon: History, needs: 'audit:read' },
   { to: paths.settings, label: 'Settings', icon: Settings, needs: 'settings:manage' },
@@ -34,7 +50,7 @@ export function AppShell() {
       >
         Skip to content
       </a>
-      <header className="bg-ink text-white">
+      <header className="bg-ink text-white print:hidden">
         <div className="mx-auto flex max-w-[96rem] flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3">
           <NavLink to={paths.home} className="flex items-center gap-2 text-xl font-extrabold">
             <span aria-hidden className="inline-block size-6 rounded-full border-[5px] border-brass-bright bg-ink" />
@@ -97,7 +113,7 @@ export function AppShell() {
           </ul>
         </nav>
       </header>
-      <main id="main" className="mx-auto max-w-[96rem] px-4 py-6">
+      <main id="main" className="mx-auto max-w-[96rem] px-4 py-6 print:p-0">
         <Outlet />
       </main>
     </div>

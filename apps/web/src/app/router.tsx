@@ -42,6 +42,20 @@ const EditGamePage = lazyPage(() => import('../features/games/game-form-page.tsx
 const NewGamePage = lazyPage(() => import('../features/games/game-form-page.tsx').then((m) => m.NewGamePage));
 const TeamPage = lazyPage(() => import('../features/team/team-page.tsx').then((m) => m.TeamPage));
 const ActivityPage = lazyPage(() => import('../features/team/activity-page.tsx').then((m) => m.ActivityPage));
+const BenchPage = lazyPage(() => import('../features/bench/bench-page.tsx').then((m) => m.BenchPage));
+const BenchJobPage = lazyPage(() => import('../features/bench/bench-job-page.tsx').then((m) => m.BenchJobPage));
+const JobSheetPage = lazyPage(() => import('../features/bench/job-sheet-page.tsx').then((m) => m.JobSheetPage));
+const NewBenchJobPage = lazyPage(() => import('../features/bench/new-bench-job-page.tsx').then((m) => m.NewBenchJobPage));
+const BenchTemplatesPage = lazyPage(() => import('../features/bench/bench-page.tsx').then((m) => m.BenchTemplatesPage));
+const BenchTemplatePage = lazyPage(() => import('../features/bench/template-page.tsx').then((m) => m.BenchTemplatePage));
+const EditBenchTemplatePage = lazyPage(() =>
+  import('../features/bench/template-editor-page.tsx').then((m) => m.EditBenchTemplatePage),
+);
+const NewBenchTemplatePage = lazyPage(() => import('../features/bench/template-editor-page.tsx').then((m) => m.NewBenchTemplatePage));
+const BoardPage = lazyPage(() => import('../features/boards/board-page.tsx').then((m) => m.BoardPage));
+const RecapDuePage = lazyPage(() => import('../features/boards/recap-due-page.tsx').then((m) => m.RecapDuePage));
+const PartsListsPage = lazyPage(() => import('../features/parts-lists/parts-lists-page.tsx').then((m) => m.PartsListsPage));
+const PartsListPage = lazyPage(() => import('../features/parts-lists/parts-list-page.tsx').then((m) => m.PartsListPage));
 
 /** A screen for those whose role has `permission` (the API checks the same table). */
 function guard(permission: Permission, page: ReactNode) {
@@ -118,6 +132,24 @@ export const router = createBrowserRouter([
             path: '/calls/:id',
             element: guard('calls:read', <CallPage />),
           },
+          { path: paths.partsLists, element: guard('bench:read', <PartsListsPage />) },
+          { path: '/parts-lists/:boardId', element: guard('bench:read', <PartsListPage />) },
+          {
+            path: '/boards/:id',
+            element: guard('bench:read', <BoardPage />),
+          },
+          {
+            path: paths.recapDue,
+            element: guard('bench:read', <RecapDuePage />),
+          },
+          { path: paths.bench, element: guard('bench:read', <BenchPage />) },
+          { path: '/bench/jobs/:id', element: guard('bench:read', <BenchJobPage />) },
+          { path: '/bench/jobs/:id/sheet', element: guard('bench:read', <JobSheetPage />) },
+          { path: '/bench/new/:boardInstanceId', element: guard('bench:work', <NewBenchJobPage />) },
+          { path: paths.benchTemplates(), element: guard('bench:read', <BenchTemplatesPage />) },
+          { path: paths.newBenchTemplate(), element: guard('bench-templates:write', <NewBenchTemplatePage />) },
+          { path: '/bench/templates/:id', element: guard('bench:read', <BenchTemplatePage />) },
+          { path: '/bench/templates/:id/edit', element: guard('bench-templates:write', <EditBenchTemplatePage />) },
           {
             path: paths.settings,
             element: guard('settings:manage', <SettingsPage />),

@@ -26,6 +26,8 @@ function withQuery(path: string, query?: Query): string {
 
 export async function api<T>(method: string, path: string, opts: { body?: unknown; query?: Query } = {}): Promise<T> {
   let res: Response;
+  // A FormData body (a photo) goes as multipart, with the boundary the browser sets.
+  const form = opts.body instanceof FormData ? opts.body : null;
   try {
     res = await fetch(withQuery(path, opts.query), {
       method,
@@ -33,9 +35,9 @@ export async function api<T>(method: string, path: string, opts: { body?: unknow
       headers: {
         Accept: 'application/json',
         'X-Requested-With': 'bumperline',
-        ...(opts.body !== undefined ? { 'Content-Type': 'application/json' } : {}),
+        ...(opts.body !== undefined && !form ? { 'Content-Type': 'application/json' } : {}),
       },
-      body: opts.body !== undefined ? JSON.stringify(opts.body) : undefined,
+      body: form ?? (opts.body !== undefined ? JSON.stringify(opts.body) : undefined),
     });
   } catch {
     throw new ApiError({
@@ -63,3 +65,6 @@ export const get = <T>(path: string, query?: Query) => api<T>('GET', path, { que
 export const post = <T>(path: string, body?: unknown) => api<T>('POST', path, { body: body ?? {} });
 export const patch = <T>(path: string, body: unknown) => api<T>('PATCH', path, { body });
 export const del = <T>(path: string) => api<T>('DELETE', path);
+export const put = <T>(path: string, body: unknown) => api<T>('PUT', path, { body });
+/** A multipart upload (photos). */
+export const postForm = <T>(path: string, form: FormData) => api<T>('POST', path, { body: form });

@@ -20,6 +20,26 @@ export const paths = {
   editGame: (id: string) => `/games/${id}/edit`,
   calls: '/calls',
   call: (id: string) => `/calls/${id}`,
+  /** Every model's boards; a board's parts list, and that list as CSV (served by the API). */
+  partsLists: '/parts-lists',
+  partsList: (boardId: string) => `/parts-lists/${boardId}`,
+  partsListCsv: (boardId: string) => `/api/boards/${boardId}/parts.csv`,
+  /** A board fitted in a game: its recap date and every reading on its parts. */
+  boardInstance: (id: string) => `/boards/${id}`,
+  recapDue: '/recap-due',
+  bench: '/bench',
+  benchJob: (id: string) => `/bench/jobs/${id}`,
+  benchJobSheet: (id: string) => `/bench/jobs/${id}/sheet`,
+  /** The API's PDF of a finished job's sheet (served by the API, opened outside the app). */
+  benchJobSheetPdf: (id: string) => `/api/bench-jobs/${id}/sheet.pdf`,
+  newBenchJob: (boardInstanceId: string, serviceCallId?: string) =>
+    `/bench/new/${boardInstanceId}${serviceCallId ? `?call=${encodeURIComponent(serviceCallId)}` : ''}`,
+  benchTemplates: () => '/bench/templates',
+  benchTemplate: (id: string) => `/bench/templates/${id}`,
+  editBenchTemplate: (id: string) => `/bench/templates/${id}/edit`,
+  newBenchTemplate: () => '/bench/templates/new',
+  /** A template's blank sheet for the bench (PDF from the API). */
+  benchTemplateSheetPdf: (id: string) => `/api/bench-templates/${id}/sheet.pdf`,
   settings: '/settings',
   team: '/team',
   activity: '/activity',

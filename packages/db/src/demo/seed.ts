@@ -15,6 +15,7 @@ import {
   venues,
 } from '../schema/index.ts';
 import { seedCallHistory } from './call-history.ts';
+import { seedBench } from './bench.ts';
 import { hashPassword } from '../passwords.ts';
 import {
   DEMO_PASSWORD,
@@ -132,6 +133,7 @@ export async function seedDemo(db: Db): Promise<boolean> {
       .from(users)
       .where(inArray(users.email, Object.keys(technicianProfiles)));
     await seedCallHistory(tx, { tenantId: demoCompany.id, games: gameRows, technicianIds: techIds.map((t) => t.id), rand });
+    await seedBench(tx, { tenantId: demoCompany.id, games: gameRows, technicianIds: techIds.map((t) => t.id) });
 
     // The second company: a few venues and games of its own.
     const [pv1, pv2, pv3] = await tx

@@ -33,7 +33,8 @@ const MULTIPLIER_EXPONENTS: Readonly<Record<string, number>> = {
 
 const SMALL_VALUE_ABSOLUTE_PF: Readonly<Record<string, number>> = { B: 0.1, C: 0.25, D: 0.5, F: 1 };
 
-function toleranceFor(letter: string, farads: number): Tolerance {
+/** A tolerance letter on a capacitor of `farads`: under 10 pF, B, C, D and F are absolute picofarads. */
+export function capacitorToleranceForLetter(letter: string, farads: number): Tolerance {
   const absolutePf = SMALL_VALUE_ABSOLUTE_PF[letter];
   if (absolutePf !== undefined && farads < 10e-12) {
     const amount = fromDecimal(absolutePf, PICO);
@@ -70,7 +71,7 @@ export function parseCapacitorCode(code: string): CapacitorCode {
     picofarads = Number(`${rWhole}.${rFraction}`);
   }
   const farads = fromDecimal(picofarads, PICO);
-  return { farads, tolerance: letter ? toleranceFor(letter, farads) : null };
+  return { farads, tolerance: letter ? capacitorToleranceForLetter(letter, farads) : null };
 }
 
 /** A capacitance to its three-digit code: 100 nF → "104", 1 pF → "109", 4.7 µF → "475". */

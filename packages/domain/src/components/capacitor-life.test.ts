@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { calendarLife, estimateLifeHours, recapDue } from './capacitor-life.ts';
+import { calendarLife, estimateLifeHours, profileLife, recapDue, recapDueWithProfile } from './capacitor-life.ts';
 
 const part = { ratedLifeHours: 2000, ratedTemperatureC: 105 };
 
@@ -123,5 +123,171 @@ describe('recapDue', () => {
     expect(() => recapDue({ ...board, asOf: '2020-13-01' })).toThrow(expect.objectContaining({ code: 'invalid-date' }));
     expect(() => recapDue({ ...board, asOf: '2020-01-01', leadMonths: -1 })).toThrow(expect.objectContaining({ code: 'negative' }));
     expect(() => recapDue({ ...board, asOf: '2020-01-01', hoursPerDay: 30 })).toThrow(expect.objectContaining({ field: 'hoursPerDay' }));
+  });
+});
+
+// Varying temperature: each hour at T uses 1/L(T) of the life, so a day uses Σ hᵢ / L(Tᵢ) (COSEL's note on lifetime
+// at varying ambient temperature; Nippon Chemi-Con's technical note on estimating life — from memory of both).
+describe('profileLife', () => {
+  it('a profile at one temperature gives exactly the single-temperature answer, whole or split into slices', () => {
+    for (const [t, hours] of [
+      [65, 8],
+      [47.3, 7],
+      [31, 13],
+    ] as const) {
+      const steady = calendarLife({ ...part, operatingTemperatureC: t, hoursPerDay: hours, maxYears: 100 });
+      const whole = profileLife({ ...part, slices: [{ hours, temperatureC: t }], maxYears: 100 });
+      const split = profileLife({
+        ...part,
+        slices: [
+          { hours: 3, temperatureC: t },
+          { hours: hours - 3, temperatureC: t },
+        ],
+        maxYears: 100,
+      });
+      for (const life of [whole, split]) {
+        expect(life.days).toBe(steady.days);
+        expect(life.years).toBe(steady.years);
+        expect(life.lifeHours).toBe(steady.lifeHours);
+        expect(life.equivalentTemperatureC).toBe(t);
+      }
+    }
+  });
+
+  it('hand-worked: 105 °C / 2,000 h part, 4 h at 45 °C + 6 h at 55 °C a day → 8,000 days', () => {
+    // L45 = 2,000 × 2^6 = 128,000 h; L55 = 2,000 × 2^5 = 64,000 h; a day uses 4/128,000 + 6/64,000 = 0.000125 of
+    // the life → 1 / 0.000125 = 8,000 days = 80,000 powered hours (worked by hand).
+    const life = profileLife({
+      ...part,
+      slices: [
+        { hours: 4, temperatureC: 45 },
+        { hours: 6, temperatureC: 55 },
+      ],
+      maxYears: 30,
+    });
+    expect(life.days).toBe(8000);
+    expect(life.lifeHours).toBe(80_000);
+    expect(life.hoursPerDay).toBe(10);
+    expect(life.years).toBeCloseTo(8000 / 365.25, 12);
+    expect(life.limitedByAge).toBe(false);
+    // 80,000 h = 2,000 × 2^((105 − T)/10) → T = 105 − 10 log2(40) = 51.78 °C (worked by hand).
+    expect(life.equivalentTemperatureC).toBeCloseTo(105 - 10 * Math.log2(40), 9);
+    // With the makers' 15-year cap (from memory), 21.9 years becomes 15.
+    expect(
+      profileLife({
+        ...part,
+        slices: [
+          { hours: 4, temperatureC: 45 },
+          { hours: 6, temperatureC: 55 },
+        ],
+      }),
+    ).toMatchObject({
+      years: 15,
+      limitedByAge: true,
+    });
+  });
+
+  it('lies between the lives at its coolest and its hottest slice (property, fixed seed)', () => {
+    fc.assert(
+      fc.property(
+        fc.array(
+          fc.record({ hours: fc.double({ min: 0.1, max: 4, noNaN: true }), temperatureC: fc.double({ min: -20, max: 105, noNaN: true }) }),
+          {
+            minLength: 1,
+            maxLength: 6,
+          },
+        ),
+        (slices) => {
+          const hoursPerDay = slices.reduce((sum, s) => sum + s.hours, 0);
+          const temperatures = slices.map((s) => s.temperatureC);
+          const at = (t: number) => calendarLife({ ...part, operatingTemperatureC: t, hoursPerDay, maxYears: 1e9 }).days;
+          const days = profileLife({ ...part, slices, maxYears: 1e9 }).days;
+          const slack = 1e-12 * days;
+          expect(days).toBeLessThanOrEqual(at(Math.min(...temperatures)) + slack);
+          expect(days).toBeGreaterThanOrEqual(at(Math.max(...temperatures)) - slack);
+        },
+      ),
+    );
+  });
+
+  it('a board never switched on is limited by age alone', () => {
+    expect(profileLife({ ...part, slices: [] })).toMatchObject({
+      years: 15,
+      limitedByAge: true,
+      hoursPerDay: 0,
+      equivalentTemperatureC: null,
+    });
+  });
+
+  it('refuses a slice above the rating (naming it), more than 24 hours, and negative hours', () => {
+    expect(() =>
+      profileLife({
+        ...part,
+        slices: [
+          { hours: 4, temperatureC: 45 },
+          { hours: 2, temperatureC: 110 },
+        ],
+      }),
+    ).toThrow(
+      expect.objectContaining({
+        code: 'above-rated-temperature',
+        field: 'slices[1].temperatureC',
+        message: expect.stringMatching(/^slice 2 \(2 h at 110 °C\) is above the part's rated 105 °C/),
+      }),
+    );
+    expect(() =>
+      profileLife({
+        ...part,
+        slices: [
+          { hours: 20, temperatureC: 45 },
+          { hours: 5, temperatureC: 50 },
+        ],
+      }),
+    ).toThrow(expect.objectContaining({ code: 'out-of-range', field: 'slices' }));
+    expect(() => profileLife({ ...part, slices: [{ hours: -1, temperatureC: 45 }] })).toThrow(
+      expect.objectContaining({ field: 'slices[0].hours' }),
+    );
+  });
+});
+
+describe('recapDueWithProfile', () => {
+  const slices = [
+    { hours: 4, temperatureC: 45 },
+    { hours: 6, temperatureC: 55 },
+  ];
+
+  it('counts the profile life on from the last recap: 8,000 days from 2010-01-01 (hand-worked above)', () => {
+    const r = recapDueWithProfile({ from: '2010-01-01', capacitors: [part], slices, asOf: '2020-01-01', maxYears: 30 });
+    // The calendar day 8,000 days on, with ECMAScript Date as the calendar.
+    expect(r.dueDate).toBe(new Date(Date.UTC(2010, 0, 1) + 8000 * 86_400_000).toISOString().slice(0, 10));
+    expect(r).toMatchObject({ manufactured: '2010-01-01', status: 'ok', limitingCapacitor: 0 });
+  });
+
+  it('agrees with recapDue for a steady temperature, and the shortest-lived part sets the date', () => {
+    const capacitors = [part, { ratedLifeHours: 1000, ratedTemperatureC: 85 }];
+    const steady = recapDue({
+      manufactured: '1534',
+      capacitors: capacitors.map((c) => ({ ...c, operatingTemperatureC: 65 })),
+      hoursPerDay: 8,
+      asOf: '2020-06-01',
+    });
+    const profiled = recapDueWithProfile({ from: '1534', capacitors, slices: [{ hours: 8, temperatureC: 65 }], asOf: '2020-06-01' });
+    expect(profiled).toEqual(steady);
+    expect(profiled.limitingCapacitor).toBe(1);
+  });
+
+  it('says overdue once past, and names the capacitor a too-hot slice rules out', () => {
+    expect(recapDueWithProfile({ from: '2000-01-01', capacitors: [part], slices, asOf: '2024-01-01' }).status).toBe('overdue');
+    expect(() =>
+      recapDueWithProfile({
+        from: '2010-01-01',
+        capacitors: [part, { ratedLifeHours: 1000, ratedTemperatureC: 50 }],
+        slices,
+        asOf: '2020-01-01',
+      }),
+    ).toThrow(expect.objectContaining({ code: 'above-rated-temperature', message: expect.stringMatching(/^capacitor 2: slice 2/) }));
+    expect(() => recapDueWithProfile({ from: '2030-01-01', capacitors: [part], slices, asOf: '2020-01-01' })).toThrow(
+      expect.objectContaining({ field: 'from' }),
+    );
   });
 });

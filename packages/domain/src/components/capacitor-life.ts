@@ -101,16 +101,30 @@ export interface RecapDue {
 const DAYS_PER_MONTH = DAYS_PER_YEAR / 12;
 
 export function recapDue(input: RecapInput): RecapDue {
-  const today = parsePlainDate(input?.asOf, 'asOf');
+  parsePlainDate(input?.asOf, 'asOf');
   const made = parseManufactureDate(input.manufactured, input.asOf);
-  if (!Array.isArray(input.capacitors) || input.capacitors.length === 0) {
-    throw new DomainError('missing-input', 'give at least one capacitor to judge the board by', 'capacitors');
-  }
-  const leadMonths = input.leadMonths === undefined ? 6 : requireNonNegative(input.leadMonths, 'leadMonths');
-
+  requireCapacitors(input.capacitors);
   const lives = input.capacitors.map((cap) =>
     calendarLife({ ...cap, hoursPerDay: input.hoursPerDay, ...(input.maxYears === undefined ? {} : { maxYears: input.maxYears }) }),
   );
+  return dueFromLives(made.date, lives, input.asOf, input.leadMonths);
+}
+
+function requireCapacitors(capacitors: readonly unknown[]): void {
+  if (!Array.isArray(capacitors) || capacitors.length === 0) {
+    throw new DomainError('missing-input', 'give at least one capacitor to judge the board by', 'capacitors');
+  }
+}
+
+/** The due date and advice from the start date and each capacitor's life: the shortest-lived part sets the date. */
+function dueFromLives(
+  from: string,
+  lives: readonly { years: number; days: number }[],
+  asOf: string,
+  leadMonthsInput: number | undefined,
+): RecapDue {
+  const today = parsePlainDate(asOf, 'asOf');
+  const leadMonths = leadMonthsInput === undefined ? 6 : requireNonNegative(leadMonthsInput, 'leadMonths');
   let limiting = 0;
   lives.forEach((life, i) => {
     if (life.years < (lives[limiting]?.years ?? Infinity)) limiting = i;
@@ -119,7 +133,7 @@ export function recapDue(input: RecapInput): RecapDue {
 
   // A part of a day rounds down (3,555.6 days → 3,555): the due date must not be later than the life allows, and
   // a recap a day early is better than a day late.
-  const due = parsePlainDate(made.date) + Math.floor(lives[limiting]?.days ?? 0);
+  const due = parsePlainDate(from) + Math.floor(lives[limiting]?.days ?? 0);
   const dueDate = formatPlainDate(due);
   const daysUntil = due - today;
   const monthsUntilDue = daysUntil <= 0 ? Math.floor(daysUntil / DAYS_PER_MONTH) : Math.ceil(daysUntil / DAYS_PER_MONTH);
@@ -137,7 +151,7 @@ export function recapDue(input: RecapInput): RecapDue {
     message = `ok — recap due ${dueDate}`;
   }
   return {
-    manufactured: made.date,
+    manufactured: from,
     dueDate,
     status,
     limitingCapacitor: limiting,
@@ -145,4 +159,129 @@ export function recapDue(input: RecapInput): RecapDue {
     monthsUntilDue,
     message,
   };
+}
+
+// ---- a cabinet's temperature through the day --------------------------------------------------------------------
+
+/** Part of a day the game is powered at one temperature inside the cabinet: "4 h at 45 °C". */
+export interface TemperatureSlice {
+  hours: number;
+  temperatureC: number;
+}
+
+export interface ProfileLifeInput {
+  ratedLifeHours: number;
+  ratedTemperatureC: number;
+  /** The powered hours of a day, each at its temperature; they sum to the hours powered per day (at most 24). */
+  slices: readonly TemperatureSlice[];
+  maxYears?: number;
+}
+
+export interface ProfileLife extends CalendarLife {
+  /** The slices' hours summed. */
+  hoursPerDay: number;
+  /** The one steady temperature that would use the part up as fast as the profile does; null when never powered. */
+  equivalentTemperatureC: number | null;
+}
+
+function requireSlices(slices: readonly TemperatureSlice[], ratedTemperatureC: number): number {
+  if (!Array.isArray(slices)) throw new DomainError('missing-input', 'slices must be a list of hours at a temperature', 'slices');
+  let hours = 0;
+  slices.forEach((slice, i) => {
+    const field = `slices[${i}]`;
+    const h = requireNonNegative(slice?.hours, `${field}.hours`);
+    const t = requireFinite(slice.temperatureC, `${field}.temperatureC`);
+    if (t > ratedTemperatureC) {
+      throw new DomainError(
+        'above-rated-temperature',
+        `slice ${i + 1} (${h} h at ${t} °C) is above the part's rated ${ratedTemperatureC} °C: the part is out of specification, not just short-lived`,
+        `${field}.temperatureC`,
+      );
+    }
+    hours += h;
+  });
+  if (hours > 24) throw new DomainError('out-of-range', `a day has 24 hours (the slices add up to ${hours} h)`, 'slices');
+  return hours;
+}
+
+/**
+ * Life under a daily temperature profile. Each hour at temperature T uses 1/L(T) of the part's life, L from the
+ * 10 °C rule above; a day uses Σ hᵢ / L(Tᵢ), so the life is 1 / Σ (hᵢ / L(Tᵢ)) days, capped by the age limit. This is
+ * how the makers combine a varying ambient temperature (COSEL's note on lifetime at varying ambient temperature and
+ * Nippon Chemi-Con's technical note: the time-weighted sum of consumed life, a Miner's-rule sum; from memory of both
+ * notes). A profile at one temperature gives exactly calendarLife's answer.
+ */
+export function profileLife(input: ProfileLifeInput): ProfileLife {
+  const ratedLife = requirePositive(input?.ratedLifeHours, 'ratedLifeHours');
+  const rated = requireInRange(input.ratedTemperatureC, -55, 200, 'ratedTemperatureC');
+  const hoursPerDay = requireSlices(input.slices, rated);
+  const maxYears = input.maxYears === undefined ? DEFAULT_MAX_YEARS : requirePositive(input.maxYears, 'maxYears');
+  const powered = input.slices.filter((slice) => slice.hours > 0);
+  const temperatures = new Set(powered.map((slice) => slice.temperatureC));
+
+  // One temperature (or none): the plain calculation, so both paths agree to the last bit.
+  if (temperatures.size <= 1) {
+    const operatingTemperatureC = powered[0]?.temperatureC ?? rated;
+    const life = calendarLife({ ratedLifeHours: ratedLife, ratedTemperatureC: rated, operatingTemperatureC, hoursPerDay, maxYears });
+    return { ...life, hoursPerDay, equivalentTemperatureC: powered.length === 0 ? null : operatingTemperatureC };
+  }
+
+  // Rated hours used per day: Σ hᵢ × L0 / L(Tᵢ). Written with the ratio L0 / L(Tᵢ) = 2^((Tᵢ − T0)/10), exact for
+  // whole steps of 10 °C, so a hand-worked example comes out exact.
+  const ratedHoursPerDay = powered.reduce(
+    (sum, slice) =>
+      sum +
+      slice.hours *
+        (ratedLife / estimateLifeHours({ ratedLifeHours: ratedLife, ratedTemperatureC: rated, operatingTemperatureC: slice.temperatureC })),
+    0,
+  );
+  const byHoursDays = ratedLife / ratedHoursPerDay;
+  const lifeHours = byHoursDays * hoursPerDay;
+  const equivalentTemperatureC = roundToSignificant(rated - 10 * Math.log2(lifeHours / ratedLife), 12);
+  const byHoursYears = byHoursDays / DAYS_PER_YEAR;
+  const limitedByAge = byHoursYears > maxYears;
+  return limitedByAge
+    ? { lifeHours, years: maxYears, days: maxYears * DAYS_PER_YEAR, limitedByAge, hoursPerDay, equivalentTemperatureC }
+    : { lifeHours, years: byHoursYears, days: byHoursDays, limitedByAge, hoursPerDay, equivalentTemperatureC };
+}
+
+export interface ProfileRecapInput {
+  /** When the clock started: the board's date code or date of manufacture, or the date of its last recap. */
+  from: string;
+  /** Every electrolytic on the board (rated life and temperature); the shortest-lived one sets the date. */
+  capacitors: readonly { ratedLifeHours: number; ratedTemperatureC: number }[];
+  /** The cabinet's day: hours powered at each temperature. */
+  slices: readonly TemperatureSlice[];
+  /** Today, YYYY-MM-DD. */
+  asOf: string;
+  leadMonths?: number;
+  maxYears?: number;
+}
+
+/** recapDue with the cabinet's temperature profile instead of one temperature (see profileLife). */
+export function recapDueWithProfile(input: ProfileRecapInput): RecapDue {
+  parsePlainDate(input?.asOf, 'asOf');
+  let from: string;
+  try {
+    from = parseManufactureDate(input.from, input.asOf).date;
+  } catch (error) {
+    if (error instanceof DomainError && error.field === 'dateCode') throw new DomainError(error.code, error.message, 'from');
+    throw error;
+  }
+  requireCapacitors(input.capacitors);
+  const lives = input.capacitors.map((cap, i) => {
+    try {
+      return profileLife({ ...cap, slices: input.slices, ...(input.maxYears === undefined ? {} : { maxYears: input.maxYears }) });
+    } catch (error) {
+      // Name the capacitor too: "slice 2 … above the part's rated 85 °C" is about one part of several.
+      if (error instanceof DomainError && error.field?.startsWith('rated')) {
+        throw new DomainError(error.code, `capacitor ${i + 1}: ${error.message}`, `capacitors[${i}].${error.field}`);
+      }
+      if (error instanceof DomainError && error.code === 'above-rated-temperature') {
+        throw new DomainError(error.code, `capacitor ${i + 1}: ${error.message}`, error.field);
+      }
+      throw error;
+    }
+  });
+  return dueFromLives(from, lives, input.asOf, input.leadMonths);
 }

@@ -5,6 +5,7 @@ import { PageHeader } from '../../components/page-header.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { GameStatusBadge } from '../../components/game-status-badge.tsx';
 import { ActivitySection } from '../../components/activity-section.tsx';
+import { BoardsSection } from '../../components/boards-section.tsx';
 import { paths } from '../../lib/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings } from '../../api/me.ts';
@@ -25,6 +26,7 @@ export function GamePage() {
   const canWrite = useCan('games:write');
   const retire = useRetireGame(id);
   const locale = useLocaleSettings();
+  const canReadBench = useCan('bench:read');
 
   if (game.isLoading) return <Loading />;
   if (game.error || !game.data) return <ErrorState error={game.error} onRetry={() => game.refetch()} />;
@@ -100,6 +102,7 @@ export function GamePage() {
           {g.notes && <p className="mt-3 rounded-md bg-brass-light p-2 text-sm">{g.notes}</p>}
         </section>
         <GameCalls gameId={g.id} title={g.model.title} canReport={!g.retiredAt} />
+        {canReadBench && <BoardsSection gameId={g.id} modelTitle={g.model.title} canFit={!g.retiredAt} />}
         <Downtime gameId={g.id} />
         <ActivitySection entityId={g.id} title="Changes" />
       </div>

@@ -1,0 +1,89 @@
+// Photos on a step: take one with the phone's camera or upload a file (the API applies the same rules as the
+// public report page's photos), then see the thumbnails.
+import { useId, useState } from 'react';
+import { Camera, Loader2 } from 'lucide-react';
+import type { BenchJobPhoto } from '@bumperline/contracts/bench-jobs';
+import { useUploadBenchPhoto } from '../../api/bench-jobs.ts';
+import { ApiError } from '../../lib/api-client.ts';
+
+export function StepPhotos({
+  jobId,
+  stepKey,
+  stepTitle,
+  photos,
+  readOnly,
+  main,
+}: {
+  jobId: string;
+  stepKey: string;
+  stepTitle: string;
+  photos: readonly BenchJobPhoto[];
+  readOnly: boolean;
+  /** The step's record is the photo itself. */
+  main: boolean;
+}) {
+  const id = useId();
+  const upload = useUploadBenchPhoto(jobId);
+  const [problem, setProblem] = useState<string | null>(null);
+  const mine = photos.filter((p) => p.stepKey === stepKey);
+  if (readOnly && !mine.length) return null;
+  return (
+    <div className="grid gap-2">
+      {mine.length > 0 && (
+        <ul className="flex flex-wrap gap-2" aria-label="Photos on this step">
+          {mine.map((p, i) => (
+            <li key={p.id}>
+              <a href={p.url} target="_blank" rel="noreferrer" className="block">
+                <img
+                  src={p.thumbUrl}
+                  alt={`Photo ${i + 1} on “${stepTitle}”`}
+                  className="size-24 rounded-md border border-paper-line object-cover"
+                  loading="lazy"
+                />
+              </a>
+            </li>
+          ))}
+        </ul>
+      )}
+      {!readOnly && (
+        <div>
+          <label htmlFor={id} className={`${main ? 'btn-primary' : 'btn-secondary'} cursor-pointer`}>
+            {upload.isPending ? <Loader2 aria-hidden className="size-4 animate-spin" /> : <Camera aria-hidden className="size-4" />}
+            {upload.isPending ? 'Uploading…' : main ? 'Take or upload a photo' : 'Add a photo'}
+          </label>
+          <input
+            id={id}
+            type="file"
+            accept="image/*"
+            capture="environment"
+            className="sr-only"
+            disabled={upload.isPending}
+            aria-describedby={problem ? `${id}-problem` : undefined}
+            onChange={(e) => {
+              const file = e.target.files?.[0];
+              e.target.value = '';
+              if (!file) return;
+              setProblem(null);
+              upload.mutate(
+                { stepKey, file },
+                {
+                  onError: (err) =>
+                    setProblem(
+                      err instanceof ApiError
+                        ? (err.problem.errors?.map((x) => x.message).join(' ') ?? err.message)
+                        : 'The photo did not upload. Try again.',
+                    ),
+                },
+              );
+            }}
+          />
+          {problem && (
+            <p id={`${id}-problem`} role="alert" className="mt-1 text-sm font-semibold text-down">
+              {problem}
+            </p>
+          )}
+        </div>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,25 @@
+// The bench screens' words for what a step records.
+import type { StepRecordKind } from '@bumperline/contracts/bench-vocabulary';
+
+export const recordLabels: Record<StepRecordKind, string> = {
+  check: 'Yes / no check',
+  readings: 'Readings',
+  diode_set: 'Diode test',
+  fuse: 'Fuse check',
+  power: 'Power check',
+  parts_used: 'Parts used',
+  photo: 'Photo',
+  note: 'Note',
+};
+
+/** What the technician does on a step of each kind, said under its title. */
+export const recordHints: Record<StepRecordKind, string> = {
+  check: 'Answer yes or no.',
+  readings: 'Read each part with the meter and type the value as the meter shows it (570, 4.63k, 1M2).',
+  diode_set: 'Diode test range: type the volts shown, or OL when nothing conducts.',
+  fuse: 'Type the marking of the fuse you fitted, as printed (T2.5A 250V).',
+  power: 'With the board running, measure the volts across each resistor.',
+  parts_used: 'List each part you fitted, from the parts list or in your own words.',
+  photo: 'Take or upload a photo.',
+  note: 'Write what you found.',
+};
