@@ -8,7 +8,7 @@ import { boardInstances, boardParts, modelBoards, partReadings } from '@bumperli
 import { buildTestApp, JSON_HEADERS, type Agent, type TestApp } from '../support/app.ts';
 import { addGame } from '../support/call-factories.ts';
 import type { CompanyFixture } from '../support/factories.ts';
-import { twoCompanies } from '../support/two-companies.ts';
+import { auditCount, twoCompanies } from '../support/two-companies.ts';
 
 let t: TestApp;
 let a: CompanyFixture;
@@ -128,6 +128,7 @@ describe('fitting a board', () => {
       .send({ version: res.body.version, dateCode: '20W12' })
       .expect(200);
     expect(settled.body).toMatchObject({ dateCode: '20W12', madeOn: '2020-03-16', dateCodeFlag: null });
+    expect(await auditCount(t.db.owner, res.body.id)).toBe(2);
     // The version moved on: an edit from the old one is refused, not merged.
     await owner
       .patch(`/api/board-instances/${res.body.id}`)

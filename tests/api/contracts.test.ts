@@ -381,10 +381,7 @@ const endpoints: Record<string, Endpoint> = {
     answer: boardPartsList,
     probe: async (a) => {
       const { body } = await a.get(`/api/boards/${company.bench.modelBoardId}`);
-      return a
-        .put(`/api/boards/${company.bench.modelBoardId}/parts`)
-        .set(JSON_HEADERS)
-        .send({ version: body.version, parts: body.parts });
+      return a.put(`/api/boards/${company.bench.modelBoardId}/parts`).set(JSON_HEADERS).send({ version: body.version, parts: body.parts });
     },
   },
   'GET /api/boards/:boardId/parts.csv': {

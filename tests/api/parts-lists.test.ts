@@ -103,11 +103,7 @@ describe('saving a parts list', () => {
     expect(opened.body).toMatchObject({ version: 2, board: { name: 'Driver board', partCount: 8 }, model: { id: a.modelId } });
 
     // Someone who opened it at version 1 saves later.
-    const stale = await owner
-      .put(`/api/boards/${board.id}/parts`)
-      .set(JSON_HEADERS)
-      .send({ version: 1, parts: powerSupply })
-      .expect(409);
+    const stale = await owner.put(`/api/boards/${board.id}/parts`).set(JSON_HEADERS).send({ version: 1, parts: powerSupply }).expect(409);
     expect(stale.body.errors).toEqual([{ field: 'version', message: 'someone else saved this parts list since you opened it' }]);
     expect(stale.body.detail).toBe('Someone else saved this parts list since you opened it.');
     expect(stale.body.current).toMatchObject({ version: 2 });

@@ -137,6 +137,8 @@ describe('query plans at scale, as the app role under row-level security', () =>
     ['owner', '/api/team'],
     ['technician', '/api/bench-templates'],
     ['technician', '/api/bench-jobs?state=in_progress'],
+    ['technician', '/api/games/:game/boards'],
+    ['technician', '/api/recap-due'],
   ];
   const resolve = (path: string) => path.replace(':call', sample.callId).replace(':game', sample.gameId).replace(':venue', sample.venueId);
 

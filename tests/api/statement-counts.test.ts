@@ -49,10 +49,17 @@ describe('statements per request', () => {
     ['technician', '/api/bench-jobs?state=in_progress', 5],
     // The job, its board's parts list, its photos.
     ['technician', '/api/bench-jobs/:benchJob', 7],
+    // The company's today; the game, its boards, their electrolytics, its cabinet profile, the model's boards.
+    ['technician', '/api/games/:game/boards', 10],
+    // The company's today; the board, its parts list, its cabinet profile, its readings, its bench jobs.
+    ['technician', '/api/board-instances/:boardInstance', 10],
+    // The company's today; every board, their electrolytics, every cabinet profile.
+    ['technician', '/api/recap-due', 8],
   ];
   const resolve = (path: string) =>
     path
       .replace(':benchJob', f.company.bench.benchJobId)
+      .replace(':boardInstance', f.company.bench.boardInstanceId)
       .replace(':call', f.company.downCallId)
       .replace(':game', f.company.gameIds[0]!)
       .replace(':venue', f.company.venueIds[0]!);

@@ -64,7 +64,7 @@ for (const width of [1280, 390]) {
     // The recap list, overdue first, filtered by status.
     await page.getByRole('link', { name: 'Recap due' }).click();
     await expect(page.getByRole('heading', { name: 'Recap due' })).toBeVisible();
-    await expect(page.getByText(/recap now: overdue since/).first()).toBeVisible();
+    await expect(page.getByText(/recap now: overdue since/i).first()).toBeVisible();
     await page.getByLabel('Status').selectOption('due-soon');
     await expect(page).toHaveURL(/status=due-soon/);
     await page.getByLabel('Status').selectOption('');

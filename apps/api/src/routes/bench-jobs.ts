@@ -16,7 +16,7 @@ import { jobSheetPdf } from '../services/bench-job-sheet.ts';
 import { addBenchPhoto } from '../services/bench-photos.ts';
 import { multipartForm, PhotoRejected, preparePhoto, type PreparedPhoto } from '../services/photo-intake.ts';
 import type { PhotoStore } from '../services/photo-store.ts';
-import { fileName } from './bench-templates.ts';
+import { pdfFileName } from '../services/pdf-sheet.ts';
 
 /** The company's clock for the sheet: "12 Mar 2027, 14:05". */
 function formatterFor(locale: string, timeZone: string): (iso: string) => string {
@@ -181,7 +181,7 @@ export function benchJobsRouter(deps: { scoped: ReturnType<typeof makeScoped>; p
       res
         .status(200)
         .type('application/pdf')
-        .set('Content-Disposition', `inline; filename="${fileName(`${job.templateName}-${job.boardSerial}`)}.pdf"`)
+        .set('Content-Disposition', `inline; filename="${pdfFileName(`${job.templateName}-${job.boardSerial}`)}.pdf"`)
         .set('Cache-Control', 'no-store')
         .send(pdf);
       return undefined;

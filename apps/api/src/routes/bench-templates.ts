@@ -18,6 +18,7 @@ import { parse } from '../http/validate.ts';
 import { idParam } from '../http/params.ts';
 import type { makeScoped } from '../http/guards.ts';
 import { templateSheetPdf } from '../services/bench-template-sheet.ts';
+import { pdfFileName } from '../services/pdf-sheet.ts';
 
 const view = (t: Omit<BenchTemplateRow, 'tenantId'>): BenchTemplate => ({
   ...t,
@@ -30,14 +31,6 @@ async function templateOrThrow(tx: Tx, id: string): Promise<BenchTemplate> {
   if (!row) throw new NotFoundError('bench-job template');
   return view(row);
 }
-
-/** A file name without characters a browser or a shell would stumble on. */
-export const fileName = (text: string) =>
-  text
-    .normalize('NFKD')
-    .replace(/[^A-Za-z0-9]+/g, '-')
-    .replace(/^-|-$/g, '')
-    .toLowerCase() || 'sheet';
 
 export function benchTemplatesRouter(scoped: ReturnType<typeof makeScoped>): Router {
   const r = Router();
@@ -101,7 +94,7 @@ export function benchTemplatesRouter(scoped: ReturnType<typeof makeScoped>): Rou
       res
         .status(200)
         .type('application/pdf')
-        .set('Content-Disposition', `inline; filename="${fileName(template.name)}.pdf"`)
+        .set('Content-Disposition', `inline; filename="${pdfFileName(template.name)}.pdf"`)
         .set('Cache-Control', 'no-store')
         .send(pdf);
       return undefined;

@@ -1,13 +1,22 @@
 // Boards fitted in games, their pages (every reading per part), a game's cabinet profile and the company's recap
 // list. Thin: parse, call the service (services/boards.ts) with the company's today, record the audit, return.
 import { Router } from 'express';
-import { boardInstanceInput, boardInstanceUpdate, cabinetProfileInput, recapFleetQuery } from '@bumperline/contracts/boards';
+import {
+  boardInstanceInput,
+  boardInstanceUpdate,
+  cabinetProfileInput,
+  recapFleetQuery,
+  type BoardInstance,
+} from '@bumperline/contracts/boards';
 import { recordAudit } from '@bumperline/db/queries/audit';
 import { parse } from '../http/validate.ts';
 import { idParam } from '../http/params.ts';
 import type { makeScoped } from '../http/guards.ts';
 import { boardPage, cabinetProfileOf, editBoard, fitBoard, gameBoards, recapFleet, setCabinetProfile } from '../services/boards.ts';
 import { companyToday } from '../services/company-today.ts';
+
+/** What the audit log keeps of a board: its stored fields, not the recap estimate worked out from them. */
+const stored = ({ recap: _recap, ...fields }: BoardInstance) => fields;
 
 export function boardsRouter(scoped: ReturnType<typeof makeScoped>): Router {
   const r = Router();
@@ -25,7 +34,13 @@ export function boardsRouter(scoped: ReturnType<typeof makeScoped>): Router {
         const gameId = idParam(req, 'gameId');
         const input = parse(boardInstanceInput, req.body);
         const board = await fitBoard(tx, gameId, input, await companyToday(tx, actor.tenantId));
-        await recordAudit(tx, { actorUserId: actor.userId, action: 'create', entity: 'board_instance', entityId: board.id, after: board });
+        await recordAudit(tx, {
+          actorUserId: actor.userId,
+          action: 'create',
+          entity: 'board_instance',
+          entityId: board.id,
+          after: stored(board),
+        });
         return board;
       },
       201,
@@ -43,7 +58,14 @@ export function boardsRouter(scoped: ReturnType<typeof makeScoped>): Router {
       const id = idParam(req);
       const update = parse(boardInstanceUpdate, req.body);
       const { before, after } = await editBoard(tx, id, update, await companyToday(tx, actor.tenantId));
-      await recordAudit(tx, { actorUserId: actor.userId, action: 'update', entity: 'board_instance', entityId: id, before, after });
+      await recordAudit(tx, {
+        actorUserId: actor.userId,
+        action: 'update',
+        entity: 'board_instance',
+        entityId: id,
+        before: stored(before),
+        after: stored(after),
+      });
       return after;
     }),
   );

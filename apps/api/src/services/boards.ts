@@ -175,8 +175,13 @@ export async function editBoard(tx: Tx, id: string, update: BoardInstanceUpdate,
 }
 
 export async function boardPage(tx: Tx, id: string, today: string): Promise<BoardPage> {
-  const instance = await instanceOrThrow(tx, id, today);
-  const parts = await listPartsForBoardHistory(tx, instance.boardId, id);
+  const row = await getBoardInstance(tx, id);
+  if (!row) throw new NotFound('board');
+  const parts = await listPartsForBoardHistory(tx, row.boardId, id);
+  // The parts list already holds the electrolytics the recap date follows: no second look at it.
+  const electrolytics = new Map([[row.boardId, parts.filter((p) => p.kind === 'electrolytic' && p.removedAt === null)]]);
+  const profiles = new Map((await listCabinetProfiles(tx, row.gameId ? [row.gameId] : [])).map((p) => [p.gameId, p.slices]));
+  const instance = toInstance(row, { electrolytics, profiles }, today);
   const readings = await listReadingsOfBoardInstance(tx, id);
   const jobs = await listBenchJobsOfBoardInstance(tx, id);
   const byPart = new Map<string, BoardPage['parts'][number]['readings']>();

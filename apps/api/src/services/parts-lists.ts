@@ -2,12 +2,7 @@
 // version its editor opened. Every row is judged by the domain's checkPartsList (the same code the editor runs
 // live), and a list with any problem saves nothing.
 import { checkPartsList, readPartEntry, type PartEntryInput } from '@bumperline/domain/components/parts-list-entry';
-import {
-  PARTS_LIST_CONFLICT,
-  type ModelBoardInput,
-  type ModelBoardUpdate,
-  type partRowInput,
-} from '@bumperline/contracts/parts-lists';
+import { PARTS_LIST_CONFLICT, type ModelBoardInput, type ModelBoardUpdate, type partRowInput } from '@bumperline/contracts/parts-lists';
 import type { z } from 'zod';
 import type { Tx } from '@bumperline/db/client';
 import { recordAudit } from '@bumperline/db/queries/audit';
@@ -74,11 +69,9 @@ export function toPartEntry(row: Omit<PartRowParsed, 'id'>): PartEntryInput {
  * Saves the whole list at `version`: every row problem is answered at once as `parts.<row>.<column>`, nothing
  * saved; a list saved by someone else since `version` is a conflict carrying the list as it now stands.
  */
-export async function savePartsList(
-  tx: Tx,
-  p: { boardId: string; version: number; parts: PartRowParsed[]; actorUserId: string },
-) {
-  if (!(await getModelBoard(tx, p.boardId))) throw new NotFound('board');
+export async function savePartsList(tx: Tx, p: { boardId: string; version: number; parts: PartRowParsed[]; actorUserId: string }) {
+  const board = await getModelBoard(tx, p.boardId);
+  if (!board) throw new NotFound('board');
   const problems = checkPartsList(p.parts.map(toPartEntry));
   if (problems.length) {
     throw new InvalidInput(
@@ -100,11 +93,13 @@ export async function savePartsList(
   }));
   const changes = await replaceBoardParts(tx, p.boardId, rows);
   const saved = await getPartsList(tx, p.boardId);
+  // The activity log shows "changed parts list" with the count before and after and the designators that moved.
   await recordAudit(tx, {
     actorUserId: p.actorUserId,
-    action: 'save_parts_list',
-    entity: 'model_board',
+    action: 'update',
+    entity: 'parts_list',
     entityId: p.boardId,
+    before: { parts: board.partCount },
     after: { parts: saved.parts.length, ...changes },
   });
   return saved;

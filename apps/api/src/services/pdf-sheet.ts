@@ -184,3 +184,11 @@ export function writingLines(doc: Doc, label: string, count: number): void {
   }
   doc.moveDown(0.5);
 }
+
+/** A file name without characters a browser or a shell would stumble on. */
+export const pdfFileName = (text: string) =>
+  text
+    .normalize('NFKD')
+    .replace(/[^A-Za-z0-9]+/g, '-')
+    .replace(/^-|-$/g, '')
+    .toLowerCase() || 'sheet';

@@ -47,7 +47,8 @@ const electrolytic = (designator: string, value: string, rating: string, tempera
   ratedLifeHours: lifeHours,
 });
 const diode = (designator: string, value: string, rating = '', notes = '') => part(designator, 'diode', value, '', rating, notes);
-const bridge = (designator: string, value: string, rating: string, notes = '') => part(designator, 'bridge_rectifier', value, '', rating, notes);
+const bridge = (designator: string, value: string, rating: string, notes = '') =>
+  part(designator, 'bridge_rectifier', value, '', rating, notes);
 const fuse = (designator: string, marking: string, notes = '') => part(designator, 'fuse', marking, '', '', notes);
 const header = (designator: string, value: string, notes = '') => part(designator, 'connector', value, '', '', notes);
 const transistor = (designator: string, value: string, notes = '') => part(designator, 'transistor', value, '', '', notes);
@@ -401,10 +402,7 @@ export type DemoBoardIds = Record<string, Record<string, string>>;
 
 /** Inserts the demo boards and their parts lists for the company (which already has the demo models). */
 export async function seedPartsLists(tx: Tx, tenantId: string): Promise<DemoBoardIds> {
-  const models = await tx
-    .select({ id: gameModels.id, title: gameModels.title })
-    .from(gameModels)
-    .where(eq(gameModels.tenantId, tenantId));
+  const models = await tx.select({ id: gameModels.id, title: gameModels.title }).from(gameModels).where(eq(gameModels.tenantId, tenantId));
   const modelIdOf = new Map(models.map((m) => [m.title, m.id]));
   const ids: DemoBoardIds = {};
   for (const board of demoBoards) {

@@ -12,12 +12,15 @@ export interface ModelBoardFields {
   notes: string;
 }
 
-/** The boards matching `where`, each with the number of parts on its list now: one grouped pass over the parts. */
-function boardsWithCounts(tx: Tx, where: SQL | undefined) {
+/**
+ * The boards matching `where`, each with the number of parts on its list now: one grouped pass over the parts of
+ * the boards `partsOf` names (all of the company's when it names none).
+ */
+function boardsWithCounts(tx: Tx, where: SQL | undefined, partsOf?: SQL) {
   const counts = tx
     .select({ boardId: boardParts.boardId, n: sql<number>`count(*)::int`.as('n') })
     .from(boardParts)
-    .where(and(eq(boardParts.tenantId, currentTenant), isNull(boardParts.removedAt)))
+    .where(and(eq(boardParts.tenantId, currentTenant), isNull(boardParts.removedAt), partsOf))
     .groupBy(boardParts.boardId)
     .as('counts');
   return tx
@@ -41,7 +44,11 @@ export type ModelBoardRow = Awaited<ReturnType<typeof boardsWithCounts>>[number]
 
 /** A model's boards by name, with their part counts. */
 export function listModelBoards(tx: Tx, modelId: string): Promise<ModelBoardRow[]> {
-  return boardsWithCounts(tx, eq(modelBoards.modelId, modelId));
+  return boardsWithCounts(
+    tx,
+    eq(modelBoards.modelId, modelId),
+    sql`${boardParts.boardId} in (select b.id from model_boards b where b.tenant_id = ${currentTenant} and b.model_id = ${modelId})`,
+  );
 }
 
 /** Every board of the company (by model, then name), with their part counts: the parts-lists overview. */
@@ -50,7 +57,7 @@ export function listAllModelBoards(tx: Tx): Promise<ModelBoardRow[]> {
 }
 
 export async function getModelBoard(tx: Tx, id: string): Promise<ModelBoardRow | undefined> {
-  const [board] = await boardsWithCounts(tx, eq(modelBoards.id, id));
+  const [board] = await boardsWithCounts(tx, eq(modelBoards.id, id), eq(boardParts.boardId, id));
   return board;
 }
 

@@ -60,6 +60,7 @@ function JobScreen({ job }: { job: BenchJob }) {
   const partsStepKey = job.steps.find((s) => s.record === 'parts_used')?.key ?? FINISH_STEP;
 
   const [search, setSearch] = useSearchParams();
+  const phoneStepList = useRef<HTMLDetailsElement>(null);
   const firstOpen = job.steps.find((s) => !job.draft.steps[s.key]?.done)?.key ?? FINISH_STEP;
   const requested = search.get('step');
   const current = requested && (stepKeys.includes(requested) || requested === FINISH_STEP) ? requested : firstOpen;
@@ -70,6 +71,8 @@ function JobScreen({ job }: { job: BenchJob }) {
         next.set('step', key);
         return next;
       });
+      // On a phone the list folds away again once a step is chosen, so the step is what shows.
+      if (phoneStepList.current) phoneStepList.current.open = false;
       window.scrollTo({ top: 0 });
     },
     [setSearch],
@@ -137,12 +140,19 @@ function JobScreen({ job }: { job: BenchJob }) {
                 {job.gameLabel}
               </Link>
             ) : null}
-            {job.boardSerial && <span>· serial {job.boardSerial}</span>}
-            <span>· {job.templateName}</span>
+            <span aria-hidden>·</span>
+            <Link className="link" to={paths.boardInstance(job.boardInstanceId)}>
+              {job.boardSerial ? `Board ${job.boardSerial}` : 'The board'}
+            </Link>
+            <span aria-hidden>·</span>
+            <span>{job.templateName}</span>
             {job.serviceCallId && (
-              <Link className="link" to={paths.call(job.serviceCallId)}>
-                · the service call
-              </Link>
+              <>
+                <span aria-hidden>·</span>
+                <Link className="link" to={paths.call(job.serviceCallId)}>
+                  The service call
+                </Link>
+              </>
             )}
           </span>
         }
@@ -190,7 +200,7 @@ function JobScreen({ job }: { job: BenchJob }) {
             />
           </div>
           {/* On a phone the list folds away under the progress; on a wide screen it stays open beside the step. */}
-          <details className="card p-2 lg:hidden">
+          <details ref={phoneStepList} className="card p-2 lg:hidden">
             <summary className="flex min-h-11 cursor-pointer items-center gap-2 px-2 font-bold">
               <ListOrdered aria-hidden className="size-5" /> All steps
             </summary>
@@ -336,7 +346,7 @@ function StepCard({
       <CautionList kinds={step.cautions} />
       <AcknowledgeCautions {...signOff} />
       <div className="grid gap-3">
-        {!readOnly && <p className="text-sm text-ink-soft">{recordHints[step.record]}</p>}
+        {!readOnly && recordHints[step.record] && <p className="text-sm text-ink-soft">{recordHints[step.record]}</p>}
         {step.record === 'readings' && <ReadingsRecord {...props} />}
         {step.record === 'diode_set' && <DiodesRecord {...props} />}
         {step.record === 'fuse' && <FusesRecord {...props} />}
@@ -359,6 +369,7 @@ function StepCard({
           photos={job.photos}
           readOnly={readOnly}
           main={step.record === 'photo'}
+          serverProblem={problems[`steps.${step.key}.photos`]}
         />
         <NoteRecord {...props} main={step.record === 'note'} />
       </div>
@@ -412,9 +423,8 @@ function FinishCard({
       )}
       {finished ? (
         <p>
-          <Link className="link" to={paths.benchJobSheet(job.id)}>
-            See the job sheet
-          </Link>
+          {progress.done} of {progress.total} steps were ticked done.
+          {notDone.length > 0 && ` Not done: ${notDone.map((s) => s.title).join(', ')}.`}
         </p>
       ) : (
         <>

@@ -13,7 +13,7 @@ import { formatDateTime } from '../../lib/format.ts';
 import { paths } from '../../lib/paths.ts';
 import { readJobParts } from './job-parts.ts';
 import { stepProgress } from './draft.ts';
-import { describeOutOfTolerance, fromDraft, fromEvaluation, outOfTolerance, type SheetReading } from './sheet-results.ts';
+import { describeOutOfTolerance, fromDraft, fromEvaluation, inPartsListOrder, outOfTolerance, type SheetReading } from './sheet-results.ts';
 import { watts } from './record-power.tsx';
 import { VerdictBadge } from './verdict-badge.tsx';
 import { recordLabels } from './words.ts';
@@ -35,7 +35,10 @@ function readingVerdict(r: SheetReading) {
 function Sheet({ job }: { job: BenchJob }) {
   const locale = useLocaleSettings();
   const parts = useMemo(() => readJobParts(job.parts), [job.parts]);
-  const results = useMemo(() => (job.evaluation ? fromEvaluation(job.evaluation) : fromDraft(job, parts)), [job, parts]);
+  const results = useMemo(
+    () => inPartsListOrder(job.evaluation ? fromEvaluation(job.evaluation) : fromDraft(job, parts), parts),
+    [job, parts],
+  );
   const out = outOfTolerance(results);
   const indicative = results.readings.filter((r) => r.indicative);
   const partOf = (partId: string) => parts.find((p) => p.id === partId);
@@ -138,10 +141,8 @@ function Sheet({ job }: { job: BenchJob }) {
                     <thead>
                       <tr>
                         <th className={cell}>Part</th>
-                        <th className={cell}>Nominal</th>
                         <th className={cell}>Reading</th>
                         <th className={cell}>Window</th>
-                        <th className={cell}>Deviation</th>
                         <th className={cell}>Verdict</th>
                       </tr>
                     </thead>
@@ -150,16 +151,16 @@ function Sheet({ job }: { job: BenchJob }) {
                         const part = partOf(r.partId);
                         return (
                           <tr key={r.partId}>
-                            <th scope="row" className={`${cell} font-bold`}>
-                              {r.designator}
+                            <th scope="row" className={`${cell} font-normal`}>
+                              <span className="block font-bold">{r.designator}</span>
+                              {part && <span className="block">{[part.line.value, part.line.tolerance].filter(Boolean).join(' ')}</span>}
                             </th>
-                            <td className={cell}>{part ? [part.line.value, part.line.tolerance].filter(Boolean).join(' ') : '—'}</td>
                             <td className={`${cell} tabular`}>
-                              {r.measuredText}
-                              {r.inCircuit ? ' (in circuit)' : ''}
+                              <span className="block">{r.measuredText}</span>
+                              {r.deviationText && <span className="block">{r.deviationText}</span>}
+                              {r.inCircuit && <span className="block">in circuit</span>}
                             </td>
                             <td className={`${cell} tabular`}>{r.windowText ?? '—'}</td>
-                            <td className={`${cell} tabular`}>{r.deviationText ?? '—'}</td>
                             <td className={cell}>
                               {readingVerdict(r)}
                               {r.verdict !== 'pass' && !r.indicative && <span className="block font-semibold">Out of tolerance</span>}
@@ -174,29 +175,72 @@ function Sheet({ job }: { job: BenchJob }) {
                 </div>
               )}
               {fuses.length > 0 && (
-                <ul className="grid gap-1">
-                  {fuses.map((f) => (
-                    <li key={f.partId} className="flex flex-wrap items-center gap-2">
-                      <strong>{f.designator}</strong> circuit needs <span className="tabular">{f.specified}</span>, fitted{' '}
-                      <span className="tabular">{f.fitted}</span>
-                      <VerdictBadge verdict={f.accepted ? 'accepted' : 'refused'} />
-                      {f.reasons.length > 0 && <span className="w-full text-sm">{f.reasons.join('; ')}</span>}
-                    </li>
-                  ))}
-                </ul>
+                <div className="overflow-x-auto">
+                  <table className="w-full border-collapse text-sm">
+                    <caption className="sr-only">Fuses on {step.title}</caption>
+                    <thead>
+                      <tr>
+                        <th className={cell}>Fuse</th>
+                        <th className={cell}>Circuit needs</th>
+                        <th className={cell}>Fitted</th>
+                        <th className={cell}>Verdict</th>
+                      </tr>
+                    </thead>
+                    <tbody>
+                      {fuses.map((f) => (
+                        <tr key={f.partId}>
+                          <th scope="row" className={`${cell} font-bold`}>
+                            {f.designator}
+                          </th>
+                          <td className={`${cell} tabular`}>{f.specified}</td>
+                          <td className={`${cell} tabular`}>{f.fitted}</td>
+                          <td className={cell}>
+                            <VerdictBadge verdict={f.accepted ? 'accepted' : 'refused'} />
+                            {f.reasons.map((reason) => (
+                              <span key={reason} className="block">
+                                {reason}
+                              </span>
+                            ))}
+                          </td>
+                        </tr>
+                      ))}
+                    </tbody>
+                  </table>
+                </div>
               )}
               {power.length > 0 && (
-                <ul className="grid gap-1">
-                  {power.map((x) => (
-                    <li key={x.partId} className="flex flex-wrap items-center gap-2 tabular">
-                      <strong>{x.designator}</strong> {x.voltsText} across it → {watts(x.watts)}
-                      {x.ratingWatts !== null && `, rated ${watts(x.ratingWatts)}`}
-                      {x.allowedWatts !== null && `, allowed ${watts(x.allowedWatts)}`}
-                      <VerdictBadge verdict={x.undersized ? 'undersized' : 'ok'} />
-                      <span className="w-full text-sm">{x.message}</span>
-                    </li>
-                  ))}
-                </ul>
+                <div className="overflow-x-auto">
+                  <table className="w-full border-collapse text-sm">
+                    <caption className="sr-only">Power checks on {step.title}</caption>
+                    <thead>
+                      <tr>
+                        <th className={cell}>Resistor</th>
+                        <th className={cell}>Volts across</th>
+                        <th className={cell}>Dissipates</th>
+                        <th className={cell}>Verdict</th>
+                      </tr>
+                    </thead>
+                    <tbody>
+                      {power.map((x) => (
+                        <tr key={x.partId}>
+                          <th scope="row" className={`${cell} font-bold`}>
+                            {x.designator}
+                          </th>
+                          <td className={`${cell} tabular`}>{x.voltsText}</td>
+                          <td className={`${cell} tabular`}>
+                            <span className="block">{watts(x.watts)}</span>
+                            {x.ratingWatts !== null && <span className="block">rated {watts(x.ratingWatts)}</span>}
+                            {x.allowedWatts !== null && <span className="block">allowed {watts(x.allowedWatts)}</span>}
+                          </td>
+                          <td className={cell}>
+                            <VerdictBadge verdict={x.undersized ? 'undersized' : 'ok'} />
+                            <span className="block">{x.message}</span>
+                          </td>
+                        </tr>
+                      ))}
+                    </tbody>
+                  </table>
+                </div>
               )}
               {p.note && (
                 <p className="whitespace-pre-line">

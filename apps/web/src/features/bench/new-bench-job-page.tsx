@@ -40,12 +40,17 @@ export function NewBenchJobPage() {
         title="Start a bench job"
         subtitle={
           <span className="inline-flex flex-wrap gap-x-2">
-            <span className="font-semibold">{instance.boardName}</span>
+            <Link className="link" to={paths.boardInstance(instance.id)}>
+              {instance.boardName}
+            </Link>
             {instance.serial && <span>· serial {instance.serial}</span>}
             {instance.gameId && instance.gameLabel && (
-              <Link className="link" to={paths.game(instance.gameId)}>
-                · {instance.gameLabel}
-              </Link>
+              <span>
+                in{' '}
+                <Link className="link" to={paths.game(instance.gameId)}>
+                  {instance.gameLabel}
+                </Link>
+              </span>
             )}
           </span>
         }

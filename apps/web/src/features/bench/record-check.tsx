@@ -10,7 +10,7 @@ export function CheckRecord({ step, progress, readOnly, problems, edit }: Record
   const problem = progress.answer ? undefined : problems[field];
   return (
     <fieldset className="grid gap-2" aria-describedby={problem ? `${id}-problem` : undefined}>
-      <legend className="mb-1 font-semibold">{step.title}?</legend>
+      <legend className="mb-1 font-semibold">Your answer</legend>
       <div className="grid grid-cols-2 gap-2">
         {(['yes', 'no'] as const).map((answer, i) => (
           <label

@@ -84,7 +84,7 @@ const DiodeSet = memo(function DiodeSet({
                   letters={['OL']}
                   letterLabel={`${part.line.designator}, ${k.label}`}
                   disabled={readOnly}
-                  placeholder="V or OL"
+                  placeholder={readOnly ? undefined : 'V or OL'}
                   aria-invalid={!!message}
                 />
               </div>

@@ -73,7 +73,7 @@ const FuseRow = memo(function FuseRow({
         spellCheck={false}
         className={`${inputClass} text-lg tabular`}
         value={fitted}
-        placeholder="as printed, e.g. T2.5A 250V"
+        placeholder={readOnly ? undefined : 'as printed, e.g. T2.5A 250V'}
         disabled={readOnly}
         aria-invalid={!!message || (result !== null && !result.accepted)}
         aria-describedby={`${id}-result`}

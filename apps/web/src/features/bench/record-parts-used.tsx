@@ -135,7 +135,7 @@ function PartUsedLine({
           className={inputClass}
           value={used.description}
           maxLength={200}
-          placeholder="e.g. 4700µF 35V 105 °C electrolytic"
+          placeholder={readOnly ? undefined : 'e.g. 4700µF 35V 105 °C electrolytic'}
           disabled={readOnly}
           aria-invalid={!!descriptionProblem}
           aria-describedby={descriptionProblem ? `${descriptionId}-problem` : undefined}

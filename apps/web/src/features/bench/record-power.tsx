@@ -73,7 +73,7 @@ const PowerRow = memo(function PowerRow({
         letters={[]}
         letterLabel={part.line.designator}
         disabled={readOnly}
-        placeholder="volts across it, e.g. 12"
+        placeholder={readOnly ? undefined : 'volts across it, e.g. 12'}
         aria-invalid={!!message || !!result?.undersized}
         aria-describedby={`${id}-result`}
       />

@@ -82,7 +82,7 @@ const ReadingRow = memo(function ReadingRow({
             letterLabel={`${part.line.designator}'s reading`}
             readOnly={readOnly}
             disabled={readOnly}
-            placeholder={part.unit === 'F' ? 'e.g. 98µ' : 'e.g. 570'}
+            placeholder={readOnly ? undefined : part.unit === 'F' ? 'e.g. 98µ' : 'e.g. 570'}
             aria-invalid={!!message}
             aria-describedby={`${id}-result`}
           />

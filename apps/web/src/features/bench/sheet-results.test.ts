@@ -3,7 +3,7 @@ import type { BenchJobPart } from '@bumperline/contracts/bench-jobs';
 import type { BenchStep } from '@bumperline/contracts/bench-vocabulary';
 import { emptyDraft, setFitted, setReading } from './draft.ts';
 import { readJobParts } from './job-parts.ts';
-import { describeOutOfTolerance, fromDraft, outOfTolerance } from './sheet-results.ts';
+import { describeOutOfTolerance, fromDraft, fromEvaluation, inPartsListOrder, outOfTolerance } from './sheet-results.ts';
 
 const line = (id: string, designator: string, kind: BenchJobPart['kind'], value: string, tolerance = ''): BenchJobPart => ({
   id,
@@ -33,10 +33,11 @@ describe('job sheet results from an open job', () => {
 
   it('lists the part read outside its window in words, and not the ones inside it or low in circuit', () => {
     // The feature's worked example: 600 Ω ±10 % read at 570 Ω passes (window 540–660 Ω).
-    let draft = setReading(emptyDraft(), 'measure', 'r1', { text: '570' });
+    // Typed out of order: the sheet lists them as the parts list does.
+    let draft = setReading(emptyDraft(), 'measure', 'r3', { text: '800', inCircuit: true });
     draft = setReading(draft, 'measure', 'r2', { text: '112k' });
-    draft = setReading(draft, 'measure', 'r3', { text: '800', inCircuit: true });
-    const results = fromDraft({ steps, draft }, parts);
+    draft = setReading(draft, 'measure', 'r1', { text: '570' });
+    const results = inPartsListOrder(fromDraft({ steps, draft }, parts), parts);
     expect(results.readings.map((r) => [r.designator, r.verdict, r.indicative])).toEqual([
       ['R1', 'pass', false],
       ['R2', 'high', false],
@@ -52,5 +53,33 @@ describe('job sheet results from an open job', () => {
     const [fuse] = fromDraft({ steps, draft }, parts).fuses;
     expect(fuse).toMatchObject({ designator: 'F1', specified: 'T2.5A 250V', fitted: 'F2.5A 250V', accepted: false });
     expect(fuse!.reasons.join(' ')).toMatch(/quick|time-lag/i);
+  });
+});
+
+describe('job sheet results from a finished job', () => {
+  it('shows the stored reading with its unit and its deviation in the trade’s notation', () => {
+    const results = fromEvaluation({
+      readings: [
+        {
+          partId: 'r7',
+          designator: 'R7',
+          stepKey: 'measure',
+          measuredText: '672',
+          measured: 672,
+          unit: 'Ω',
+          inCircuit: false,
+          indicative: false,
+          verdict: 'high',
+          min: 540,
+          max: 660,
+          windowText: '540 Ω – 660 Ω',
+          deviationPercent: 12,
+          note: 'above the maximum of 660 Ω',
+        },
+      ],
+      fuses: [],
+      power: [],
+    });
+    expect(outOfTolerance(results).map(describeOutOfTolerance)).toEqual(['R7 reads HIGH: 672 Ω against 540 Ω – 660 Ω (+12.0 %)']);
   });
 });

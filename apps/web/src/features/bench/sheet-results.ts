@@ -2,6 +2,7 @@
 // still open) the same judgement worked out here by the domain from the draft.
 import type { BenchJob, BenchJobEvaluation } from '@bumperline/contracts/bench-jobs';
 import { evaluateBenchJob, formatDeviation } from '@bumperline/domain/components/bench-judgement';
+import { formatQuantity, UNITS, type Unit } from '@bumperline/domain/components/values';
 import type { JobPart } from './job-parts.ts';
 
 export interface SheetReading {
@@ -53,7 +54,11 @@ export function fromEvaluation(e: BenchJobEvaluation): SheetResults {
       stepKey: r.stepKey,
       partId: r.partId,
       designator: r.designator,
-      measuredText: r.measuredText,
+      // The server keeps the reading as typed ("672"); the sheet shows it with its unit, as the job screen did.
+      measuredText:
+        r.measured !== null && UNITS.includes(r.unit as Unit)
+          ? formatQuantity(r.measured, r.unit as Unit, { significantDigits: 6 })
+          : r.measuredText,
       windowText: r.windowText,
       deviationText: r.deviationPercent === null ? null : formatDeviation(r.deviationPercent),
       verdict: r.verdict,
@@ -133,4 +138,12 @@ export function describeOutOfTolerance(r: SheetReading): string {
   const verdict = r.verdict.toUpperCase();
   if (r.windowText === null) return `${r.designator} FAILS the diode test: ${r.note ?? r.measuredText}`;
   return `${r.designator} reads ${verdict}: ${r.measuredText} against ${r.windowText}${r.deviationText ? ` (${r.deviationText})` : ''}`;
+}
+
+/** Rows in the order of the board's parts list (R1, R2, … as printed), whatever order they were typed in. */
+export function inPartsListOrder(results: SheetResults, parts: readonly { id: string }[]): SheetResults {
+  const position = new Map(parts.map((p, i) => [p.id, i]));
+  const byPart = <T extends { partId: string }>(rows: T[]) =>
+    [...rows].sort((a, b) => (position.get(a.partId) ?? Number.MAX_SAFE_INTEGER) - (position.get(b.partId) ?? Number.MAX_SAFE_INTEGER));
+  return { readings: byPart(results.readings), fuses: byPart(results.fuses), power: byPart(results.power) };
 }

@@ -1,10 +1,11 @@
 // Photos on a step: take one with the phone's camera or upload a file (the API applies the same rules as the
 // public report page's photos), then see the thumbnails.
-import { useId, useState } from 'react';
+import { useState } from 'react';
 import { Camera, Loader2 } from 'lucide-react';
 import type { BenchJobPhoto } from '@bumperline/contracts/bench-jobs';
 import { useUploadBenchPhoto } from '../../api/bench-jobs.ts';
 import { ApiError } from '../../lib/api-client.ts';
+import { fieldDomId } from './field-problems.ts';
 
 export function StepPhotos({
   jobId,
@@ -13,6 +14,7 @@ export function StepPhotos({
   photos,
   readOnly,
   main,
+  serverProblem,
 }: {
   jobId: string;
   stepKey: string;
@@ -21,11 +23,14 @@ export function StepPhotos({
   readOnly: boolean;
   /** The step's record is the photo itself. */
   main: boolean;
+  /** What finishing said about this step's photos ("add a photo before ticking this step"). */
+  serverProblem: string | undefined;
 }) {
-  const id = useId();
+  const id = fieldDomId(`steps.${stepKey}.photos`);
   const upload = useUploadBenchPhoto(jobId);
   const [problem, setProblem] = useState<string | null>(null);
   const mine = photos.filter((p) => p.stepKey === stepKey);
+  const shown = problem ?? (mine.length ? undefined : serverProblem);
   if (readOnly && !mine.length) return null;
   return (
     <div className="grid gap-2">
@@ -58,7 +63,7 @@ export function StepPhotos({
             capture="environment"
             className="sr-only"
             disabled={upload.isPending}
-            aria-describedby={problem ? `${id}-problem` : undefined}
+            aria-describedby={shown ? `${id}-problem` : undefined}
             onChange={(e) => {
               const file = e.target.files?.[0];
               e.target.value = '';
@@ -70,16 +75,16 @@ export function StepPhotos({
                   onError: (err) =>
                     setProblem(
                       err instanceof ApiError
-                        ? (err.problem.errors?.map((x) => x.message).join(' ') ?? err.message)
+                        ? err.problem.errors?.map((x) => x.message).join(' ') || err.message
                         : 'The photo did not upload. Try again.',
                     ),
                 },
               );
             }}
           />
-          {problem && (
+          {shown && (
             <p id={`${id}-problem`} role="alert" className="mt-1 text-sm font-semibold text-down">
-              {problem}
+              {shown}
             </p>
           )}
         </div>

@@ -12,8 +12,8 @@ const looks: Record<VerdictWord, { label: string; icon: typeof CircleCheck; tone
   fail: { label: 'FAIL', icon: OctagonX, tone: 'border-down bg-down-tint text-down' },
   refused: { label: 'REFUSED', icon: OctagonX, tone: 'border-down bg-down-tint text-down' },
   undersized: { label: 'UNDERSIZED', icon: OctagonX, tone: 'border-down bg-down-tint text-down' },
-  // A low reading in circuit may be parallel paths: attention, not a fail.
-  indicative: { label: 'LOW · INDICATIVE', icon: CircleHelp, tone: 'border-attention bg-attention-tint text-attention' },
+  // A low reading in circuit may be parallel paths: attention, not a fail (the word “indicative” is said beside it).
+  indicative: { label: 'LOW', icon: CircleHelp, tone: 'border-attention bg-attention-tint text-attention' },
 };
 
 export function VerdictBadge({ verdict, label }: { verdict: VerdictWord; label?: string }) {

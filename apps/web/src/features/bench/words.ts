@@ -14,7 +14,7 @@ export const recordLabels: Record<StepRecordKind, string> = {
 
 /** What the technician does on a step of each kind, said under its title. */
 export const recordHints: Record<StepRecordKind, string> = {
-  check: 'Answer yes or no.',
+  check: '',
   readings: 'Read each part with the meter and type the value as the meter shows it (570, 4.63k, 1M2).',
   diode_set: 'Diode test range: type the volts shown, or OL when nothing conducts.',
   fuse: 'Type the marking of the fuse you fitted, as printed (T2.5A 250V).',

@@ -231,7 +231,7 @@ function RecapCard({ board: b }: { board: BoardInstance }) {
       <p className="mt-3 text-sm text-ink-soft">
         {r.defaultProfile ? (
           <>
-            The cabinet has no temperature profile yet, so this uses our assumed day (10 h powered: 4 h at 35 °C, then 6 h at 45 °C).{' '}
+            The cabinet has no temperature profile yet, so this uses our assumed day for a game in a bar.{' '}
             {b.gameId && (
               <Link className="link" to={paths.game(b.gameId)}>
                 Set the cabinet’s own on the game’s page
@@ -342,7 +342,8 @@ function ReadingsTable({ part: p, locale }: { part: BoardPartHistory; locale: Lo
       <summary className="inline-flex min-h-11 cursor-pointer items-center text-sm font-semibold">
         {p.designator}: all {p.readings.length} reading{p.readings.length === 1 ? '' : 's'} as a table
       </summary>
-      <div className="overflow-x-auto">
+      {/* Focusable, so a keyboard can scroll the table sideways on a narrow screen. */}
+      <div className="overflow-x-auto" tabIndex={0} role="region" aria-label={`Readings of ${p.designator}`}>
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Readings of {p.designator}, oldest first</caption>
           <thead className="bg-paper-dim text-ink-soft">
@@ -371,7 +372,7 @@ function ReadingsTable({ part: p, locale }: { part: BoardPartHistory; locale: Lo
             {p.readings.map((r) => (
               <tr key={r.id} className="border-t border-paper-line">
                 <td className="px-2 py-1 whitespace-nowrap">{formatDateTime(r.takenAt, locale)}</td>
-                <td className="px-2 py-1 tabular">
+                <td className="px-2 py-1 tabular whitespace-nowrap">
                   {r.measured !== null ? formatReadingValue(r.measured, r.unit) : r.measuredText}
                   {r.inCircuit && <span className="text-ink-muted"> (in circuit)</span>}
                 </td>

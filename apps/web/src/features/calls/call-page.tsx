@@ -2,7 +2,7 @@
 // the messages it sent and the reporter's photos.
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
-import { Camera, MessageSquare, Send, UserMinus, UserPlus } from 'lucide-react';
+import { Camera, CircuitBoard, MessageSquare, Send, UserMinus, UserPlus } from 'lucide-react';
 import type { CallDetail, CallEvent, ServiceCall } from '@bumperline/contracts/calls';
 import {
   callRef,
@@ -23,6 +23,7 @@ import { inputClass } from '../../components/field.tsx';
 import { paths } from '../../lib/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings, useMe } from '../../api/me.ts';
+import { useGameBoards } from '../../api/boards.ts';
 import {
   useAddNote,
   useAnswerAssignment,
@@ -172,6 +173,7 @@ function CallView({ detail }: { detail: CallDetail }) {
 
           {canDispatch && open && <AssignPanel call={call} onError={conflict.onError} onDone={conflict.clear} />}
           {open && <NoteForm callId={call.id} />}
+          <BenchJobSection call={call} />
         </div>
 
         <div className="grid content-start gap-4">
@@ -378,5 +380,53 @@ function SeverityPicker({ call, onError }: { call: ServiceCall; onError: (e: unk
         ))}
       </select>
     </label>
+  );
+}
+
+/** A board taken to the bench from this call: its game's boards, each with a way to start a bench job for it. */
+function BenchJobSection({ call }: { call: ServiceCall }) {
+  const canWork = useCan('bench:work');
+  const boards = useGameBoards(call.gameId);
+  if (!canWork) return null;
+  return (
+    <section className="card grid gap-2" aria-labelledby="bench-job">
+      <h2 id="bench-job" className="flex items-center gap-2 text-lg font-bold">
+        <CircuitBoard aria-hidden className="size-5" /> Bench job
+      </h2>
+      {boards.isLoading ? (
+        <Loading />
+      ) : boards.error ? (
+        <ErrorState error={boards.error} onRetry={() => boards.refetch()} />
+      ) : !boards.data?.items.length ? (
+        <p className="text-ink-soft">
+          No boards are recorded for this game yet.{' '}
+          <Link className="link" to={paths.game(call.gameId)}>
+            Add them on the game’s page
+          </Link>
+          .
+        </p>
+      ) : (
+        <>
+          <p className="text-sm text-ink-soft">Taking a board to the bench for this call? Start its bench job here.</p>
+          <ul className="grid gap-2">
+            {boards.data.items.map((b) => (
+              <li key={b.id} className="flex flex-wrap items-center justify-between gap-2 rounded-md border border-paper-line p-2">
+                <span>
+                  <span className="font-bold">{b.boardName}</span>
+                  {b.serial && <span className="text-ink-soft"> · serial {b.serial}</span>}
+                </span>
+                <Link
+                  className="btn-secondary"
+                  to={paths.newBenchJob(b.id, call.id)}
+                  aria-label={`Start a bench job on the ${b.boardName}`}
+                >
+                  Start a bench job
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </>
+      )}
+    </section>
   );
 }

@@ -22,10 +22,8 @@ export function CsvImportPanel({ result, onChooseAgain, onCancel }: { result: Im
         {fileName}: nothing imported yet
       </h3>
       <p className="text-ink">
-        {fileWide
-          ? 'The file cannot be read as a parts list.'
-          : `${rowsWithProblems} of ${rows.length} rows have problems.`}{' '}
-        Fix them in the file and choose it again; the table stays as it is until then.
+        {fileWide ? 'The file cannot be read as a parts list.' : `${rowsWithProblems} of ${rows.length} rows have problems.`} Fix them in
+        the file and choose it again; the table stays as it is until then.
       </p>
       <ul className="max-h-72 overflow-auto rounded border border-paper-line bg-white p-2 text-sm">
         {problems.slice(0, SHOWN_PROBLEMS).map((p, i) => (

@@ -15,9 +15,36 @@ describe('reading a parts list from a CSV file', () => {
     const read = readPartsCsv(file);
     expect(read.problems).toEqual([]);
     expect(read.rows).toEqual([
-      { designator: 'F1', kind: 'fuse', value: 'T2.5A 250V', tolerance: '', rating: '', ratedTemperatureC: null, ratedLifeHours: null, notes: 'mains primary' },
-      { designator: 'C1', kind: 'electrolytic', value: '15000µF', tolerance: '+80/-20%', rating: '25 V', ratedTemperatureC: 85, ratedLifeHours: 2000, notes: '' },
-      { designator: 'R1', kind: 'resistor', value: '600', tolerance: '±10 %', rating: '5 W', ratedTemperatureC: null, ratedLifeHours: null, notes: '=bleeder' },
+      {
+        designator: 'F1',
+        kind: 'fuse',
+        value: 'T2.5A 250V',
+        tolerance: '',
+        rating: '',
+        ratedTemperatureC: null,
+        ratedLifeHours: null,
+        notes: 'mains primary',
+      },
+      {
+        designator: 'C1',
+        kind: 'electrolytic',
+        value: '15000µF',
+        tolerance: '+80/-20%',
+        rating: '25 V',
+        ratedTemperatureC: 85,
+        ratedLifeHours: 2000,
+        notes: '',
+      },
+      {
+        designator: 'R1',
+        kind: 'resistor',
+        value: '600',
+        tolerance: '±10 %',
+        rating: '5 W',
+        ratedTemperatureC: null,
+        ratedLifeHours: null,
+        notes: '=bleeder',
+      },
     ]);
   });
 

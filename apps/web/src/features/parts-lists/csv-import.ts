@@ -29,7 +29,14 @@ export function readPartsCsv(text: string, maxRows = MAX_PARTS_PER_BOARD): CsvIm
   if (rows.length > maxRows) {
     return {
       rows: [],
-      problems: [{ row: 0, designator: '', field: 'rows', message: `the file has ${rows.length} parts; a parts list holds at most ${maxRows.toLocaleString('en-US')}` }],
+      problems: [
+        {
+          row: 0,
+          designator: '',
+          field: 'rows',
+          message: `the file has ${rows.length} parts; a parts list holds at most ${maxRows.toLocaleString('en-US')}`,
+        },
+      ],
     };
   }
   for (const e of parsed.errors) {

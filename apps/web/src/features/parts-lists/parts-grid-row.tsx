@@ -15,8 +15,8 @@ export interface CellHandlers {
 
 /** Widths that keep a row on one line at desktop size; the table scrolls sideways on a phone. */
 const WIDTHS: Record<GridField, string> = {
-  designator: 'w-24',
-  kind: 'w-44',
+  designator: 'w-20',
+  kind: 'w-48',
   value: 'w-40',
   tolerance: 'w-24',
   rating: 'w-28',
@@ -26,6 +26,9 @@ const WIDTHS: Record<GridField, string> = {
 };
 
 export const columnWidth = (field: GridField) => WIDTHS[field];
+
+/** The designator stays in view while a narrow screen scrolls the other columns sideways. */
+const STICKY_FIRST = 'sticky left-0 z-[1] bg-white';
 
 const cellInput =
   'w-full rounded border border-transparent bg-transparent px-2 py-1.5 text-base text-ink hover:border-paper-line focus:border-ink focus:bg-white aria-[invalid=true]:border-down aria-[invalid=true]:bg-down-tint';
@@ -71,7 +74,7 @@ export const PartsGridRow = memo(function PartsGridRow({
           onFocus: handlers.onFocus,
         };
         return (
-          <td key={column.field} className={`${columnWidth(column.field)} p-1`}>
+          <td key={column.field} className={`${columnWidth(column.field)} p-1 ${col === 0 ? STICKY_FIRST : ''}`}>
             {column.field === 'kind' ? (
               <select
                 {...common}

@@ -106,7 +106,14 @@ describe('checking the rows as typed', () => {
       row('blank', {}),
       row('b', { designator: 'C1', kind: 'electrolytic', value: '4700µF', tolerance: '20%', rating: '35 V', ratedTemperatureC: '105' }),
       row('c', { designator: 'r1', value: '1k', tolerance: '150%' }),
-      row('d', { designator: 'C2', kind: 'electrolytic', value: '10µF', tolerance: '20%', ratedTemperatureC: 'hot', ratedLifeHours: '2,000' }),
+      row('d', {
+        designator: 'C2',
+        kind: 'electrolytic',
+        value: '10µF',
+        tolerance: '20%',
+        ratedTemperatureC: 'hot',
+        ratedLifeHours: '2,000',
+      }),
     ];
     const check = checkGrid(rows);
     expect(check.keys).toEqual(['a', 'b', 'c', 'd']);
@@ -124,7 +131,15 @@ describe('checking the rows as typed', () => {
   it('has nothing to say about a clean list, whose rows go to the API as numbers', () => {
     const check = checkGrid([
       { ...row('a', { designator: 'F1', kind: 'fuse', value: 'T2.5A 250V' }), id: '0b5e0f3a-1111-4111-8111-111111111111' },
-      row('b', { designator: 'C1', kind: 'electrolytic', value: '4700µF', tolerance: 'M', rating: '35 V', ratedTemperatureC: '85', ratedLifeHours: '2000 h' }),
+      row('b', {
+        designator: 'C1',
+        kind: 'electrolytic',
+        value: '4700µF',
+        tolerance: 'M',
+        rating: '35 V',
+        ratedTemperatureC: '85',
+        ratedLifeHours: '2000 h',
+      }),
     ]);
     expect(check.count).toBe(0);
     expect(check.parts).toEqual([

@@ -42,7 +42,17 @@ export interface GridRow {
 export type KeyMaker = () => string;
 
 export function blankRow(key: string): GridRow {
-  return { key, designator: '', kind: 'resistor', value: '', tolerance: '', rating: '', ratedTemperatureC: '', ratedLifeHours: '', notes: '' };
+  return {
+    key,
+    designator: '',
+    kind: 'resistor',
+    value: '',
+    tolerance: '',
+    rating: '',
+    ratedTemperatureC: '',
+    ratedLifeHours: '',
+    notes: '',
+  };
 }
 
 export function gridRowFromPart(part: PartRow | PartRowInput, key: string): GridRow {
@@ -111,7 +121,10 @@ export function checkGrid(rows: readonly GridRow[]): GridCheck {
 }
 
 /** The API's field errors (`parts.<i>.<column>`) on the rows they name. */
-export function problemsFromServer(errors: readonly { field: string; message: string }[], keys: readonly string[]): Map<string, CellProblems> {
+export function problemsFromServer(
+  errors: readonly { field: string; message: string }[],
+  keys: readonly string[],
+): Map<string, CellProblems> {
   const problems = new Map<string, CellProblems>();
   for (const e of errors) {
     const m = /^parts\.(\d+)(?:\.(\w+))?$/.exec(e.field);

@@ -325,8 +325,8 @@ export function PartsListEditor({ list, readOnly }: { list: BoardPartsList; read
 
       {!readOnly && (
         <p className="text-sm text-ink-muted">
-          Arrow keys, Enter and Tab move between cells; type to replace a cell, Esc to undo it. Paste rows copied from a spreadsheet
-          (or comma-separated lines) into a cell to fill the table from there.
+          Arrow keys, Enter and Tab move between cells; type to replace a cell, Esc to undo it. Paste rows copied from a spreadsheet (or
+          comma-separated lines) into a cell to fill the table from there.
           {dirty && ' Export CSV gives the saved list: save first to include your changes.'}
         </p>
       )}
@@ -344,7 +344,10 @@ export function PartsListEditor({ list, readOnly }: { list: BoardPartsList; read
           if (!file) return;
           const result = { fileName: file.name, ...readPartsCsv(await file.text()) };
           if (result.problems.length === 0) importRows(result);
-          else setImporting(result);
+          else {
+            setNotice(null);
+            setImporting(result);
+          }
         }}
       />
 
@@ -409,15 +412,25 @@ export function PartsListEditor({ list, readOnly }: { list: BoardPartsList; read
         </p>
       )}
 
-      <div ref={scrollRef} className="max-h-[70vh] overflow-auto rounded-md border border-paper-line" role="region" aria-label="Parts list cells" tabIndex={-1}>
+      <div
+        ref={scrollRef}
+        className="max-h-[70vh] overflow-auto rounded-md border border-paper-line"
+        role="region"
+        aria-label="Parts list cells"
+        tabIndex={-1}
+      >
         <table className="w-max min-w-full border-collapse">
           <thead className="sticky top-0 z-10 bg-paper-dim text-left text-sm">
             <tr>
               <th scope="col" className="w-10 px-2 py-2 text-right">
                 <span className="sr-only">Row</span>#
               </th>
-              {GRID_COLUMNS.map((c) => (
-                <th key={c.field} scope="col" className={`${columnWidth(c.field)} px-3 py-2 font-bold`}>
+              {GRID_COLUMNS.map((c, col) => (
+                <th
+                  key={c.field}
+                  scope="col"
+                  className={`${columnWidth(c.field)} px-3 py-2 font-bold ${col === 0 ? 'sticky left-0 z-[2] bg-paper-dim' : ''}`}
+                >
                   {c.label}
                 </th>
               ))}

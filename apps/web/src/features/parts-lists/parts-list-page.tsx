@@ -37,7 +37,10 @@ export function PartsListPage() {
             {board.partNumber && (
               <>
                 {' '}
-                · part number <span className="tabular">{board.partNumber}</span>
+                ·{' '}
+                <span className="whitespace-nowrap">
+                  part number <span className="tabular">{board.partNumber}</span>
+                </span>
               </>
             )}
             {board.notes && <span className="mt-1 block">{board.notes}</span>}

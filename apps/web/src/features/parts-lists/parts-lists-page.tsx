@@ -19,7 +19,8 @@ export function PartsListsPage() {
 
   if (overview.isLoading) return <Loading />;
   if (overview.error || !overview.data) return <ErrorState error={overview.error} onRetry={() => overview.refetch()} />;
-  const models = overview.data.items;
+  // Models whose boards are listed come first (in the API's maker and title order), then the rest.
+  const models = [...overview.data.items].sort((a, b) => Number(b.boards.length > 0) - Number(a.boards.length > 0));
 
   return (
     <>
