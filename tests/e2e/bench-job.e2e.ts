@@ -4,6 +4,7 @@
 // sheet's PDF lists the out-of-tolerance part → the board's history shows the new reading beside the earlier ones.
 import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
 import { PDFParse } from 'pdf-parse';
+import sharp from 'sharp';
 import { demo, scan, signIn } from './fixtures.ts';
 
 const PHONE = { width: 390, height: 844 };
@@ -132,14 +133,30 @@ test('bench job on a phone: caution, fuse refused then accepted, a high reading,
   await expect(page.getByText(/^Saved \d/)).toBeVisible({ timeout: 10_000 });
   await scan(page, 'bench-phone-parts-used');
 
-  // 6. Finish: the server judges it all again and the job becomes read-only, with its sheet.
+  // 6. Finishing is refused while a step ticked done lacks what it records: the problem shows at its field,
+  //    with the step opened for it; the rest of the job is kept.
+  await openStep(page, 'Photo of the finished board');
+  await page.getByRole('checkbox', { name: 'Done', exact: true }).check();
+  await openStep(page, 'Finish the job');
+  await page.getByRole('button', { name: 'Finish the job' }).click();
+  await expect(page.getByText('Not finished: 1 thing needs fixing. Your entries are kept.')).toBeVisible();
+  await expect(page.getByRole('heading', { level: 2, name: 'Photo of the finished board' })).toBeVisible();
+  await expect(page.getByText('Add a photo before ticking this step')).toBeVisible();
+  await scan(page, 'bench-phone-finish-refused');
+  const photo = await sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 40, g: 90, b: 60 } } })
+    .jpeg()
+    .toBuffer();
+  await page.getByLabel('Take or upload a photo').setInputFiles({ name: 'board.jpg', mimeType: 'image/jpeg', buffer: photo });
+  await expect(page.getByRole('img', { name: 'Photo 1 on “Photo of the finished board”' })).toBeVisible();
+
+  // 7. Finish: the server judges it all again and the job becomes read-only, with its sheet.
   await openStep(page, 'Finish the job');
   await page.getByRole('button', { name: 'Finish the job' }).click();
   await expect(page.getByText(/^Finished by /)).toBeVisible({ timeout: 15_000 });
   await expect(page.getByRole('button', { name: 'Finish the job' })).toHaveCount(0);
   await scan(page, 'bench-phone-finished');
 
-  // 7. The job sheet names the out-of-tolerance part in words; its PDF says the same.
+  // 8. The job sheet names the out-of-tolerance part in words; its PDF says the same.
   await page.getByRole('link', { name: 'Job sheet', exact: true }).click();
   await expect(page.getByRole('heading', { name: 'Out of tolerance' })).toBeVisible();
   await expect(page.getByText('R7 reads HIGH: 672 Ω against 540 Ω – 660 Ω (+12.0 %) — out of tolerance')).toBeVisible();
@@ -163,7 +180,7 @@ test('bench job on a phone: caution, fuse refused then accepted, a high reading,
   await page.screenshot({ path: 'e2e/screenshots/bench-sheet-print.png', fullPage: true });
   await page.emulateMedia({ media: 'screen' });
 
-  // 8. The board's history: the new reading beside the earlier ones.
+  // 9. The board's history: the new reading beside the earlier ones.
   await page.goto(`/boards/${supply.boardId}`);
   const r7Line = page.getByRole('listitem').filter({ has: page.getByText('R7: all', { exact: false }) });
   await expect(r7Line).toContainText('672 Ω');
@@ -188,4 +205,40 @@ test('bench job on a phone: caution, fuse refused then accepted, a high reading,
   await scan(wide, 'bench-desktop-bench');
   await phone.close();
   await desktop.close();
+});
+
+test('bench templates: read one with its cautions in full, write one, reorder its steps; refusals shown at the field', async ({ page }) => {
+  await page.setViewportSize(PHONE);
+  await signIn(page, demo.technician);
+  await page.goto('/bench');
+  await page.getByRole('link', { name: 'Power supply recap and reflow' }).click();
+  await expect(page.getByRole('heading', { level: 2, name: /Unplug and verify dead/ })).toBeVisible();
+  await expect(page.getByText(/Filter capacitors can hold a dangerous charge/)).toBeVisible();
+  await expect(page.getByRole('link', { name: 'Blank sheet (PDF)' })).toHaveAttribute(
+    'href',
+    /\/api\/bench-templates\/[0-9a-f-]+\/sheet\.pdf$/,
+  );
+  await scan(page, 'bench-phone-template');
+
+  await page.goto('/bench/templates/new');
+  await page.getByRole('textbox', { name: 'Name' }).fill('Driver board quick check');
+  await page.getByRole('textbox', { name: 'Title' }).fill('Measure the coil resistors');
+  await page.getByLabel('What the step records').selectOption('readings');
+  // A readings step must say which parts: the server refuses it, and says so at the field.
+  await page.getByRole('button', { name: 'Save the template' }).click();
+  await expect(page.getByText('Must name the part kinds or the designators this step measures')).toBeVisible();
+  await expect(page.getByRole('textbox', { name: 'Title' })).toHaveValue('Measure the coil resistors');
+  await page.getByRole('checkbox', { name: 'Resistor' }).check();
+  await page.getByRole('button', { name: 'Add a step' }).click();
+  await page.getByRole('textbox', { name: 'Title' }).nth(1).fill('Reflow the connector joints');
+  await page.getByRole('checkbox', { name: 'Hot iron' }).nth(1).check();
+  await page.getByRole('button', { name: 'Move step 2 up' }).click();
+  await scan(page, 'bench-phone-template-editor');
+  await page.getByRole('button', { name: 'Save the template' }).click();
+  await expect(page.getByRole('heading', { level: 1, name: 'Driver board quick check' })).toBeVisible();
+  const steps = page.getByRole('listitem').filter({ has: page.getByRole('heading', { level: 2 }) });
+  await expect(steps.nth(0)).toContainText('Reflow the connector joints');
+  await expect(steps.nth(0)).toContainText('Caution: Hot iron');
+  await expect(steps.nth(1)).toContainText('Measure the coil resistors');
+  await expect(steps.nth(1)).toContainText('every resistor');
 });

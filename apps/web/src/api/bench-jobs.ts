@@ -52,7 +52,9 @@ export const saveBenchDraft = (id: string, version: number, draft: BenchJobDraft
 
 /** The job's cached copy after a save, so leaving and coming back shows what was saved. */
 export function rememberSavedDraft(qc: QueryClient, id: string, draft: BenchJobDraft, saved: BenchDraftSaved) {
-  qc.setQueryData<BenchJob>(benchJobKeys.detail(id), (job) => (job ? { ...job, draft, version: saved.version, updatedAt: saved.savedAt } : job));
+  qc.setQueryData<BenchJob>(benchJobKeys.detail(id), (job) =>
+    job ? { ...job, draft, version: saved.version, updatedAt: saved.savedAt } : job,
+  );
 }
 
 export function useFinishBenchJob(id: string) {

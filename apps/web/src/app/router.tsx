@@ -48,9 +48,7 @@ const JobSheetPage = lazyPage(() => import('../features/bench/job-sheet-page.tsx
 const NewBenchJobPage = lazyPage(() => import('../features/bench/new-bench-job-page.tsx').then((m) => m.NewBenchJobPage));
 const BenchTemplatesPage = lazyPage(() => import('../features/bench/bench-page.tsx').then((m) => m.BenchTemplatesPage));
 const BenchTemplatePage = lazyPage(() => import('../features/bench/template-page.tsx').then((m) => m.BenchTemplatePage));
-const EditBenchTemplatePage = lazyPage(() =>
-  import('../features/bench/template-editor-page.tsx').then((m) => m.EditBenchTemplatePage),
-);
+const EditBenchTemplatePage = lazyPage(() => import('../features/bench/template-editor-page.tsx').then((m) => m.EditBenchTemplatePage));
 const NewBenchTemplatePage = lazyPage(() => import('../features/bench/template-editor-page.tsx').then((m) => m.NewBenchTemplatePage));
 const BoardPage = lazyPage(() => import('../features/boards/board-page.tsx').then((m) => m.BoardPage));
 const RecapDuePage = lazyPage(() => import('../features/boards/recap-due-page.tsx').then((m) => m.RecapDuePage));

@@ -17,7 +17,7 @@ describe('placeProblems', () => {
     expect(placed.first?.field).toBe('steps.fuses.fuses.f1');
     expect(placed.countByStep).toEqual({ fuses: 1, measure: 2 });
     expect(placed.byField['steps.measure.readings.r12']).toBe('"abc" is not a value');
-    expect(placed.byField['partsUsed.0.quantity']).toBe('must be a whole number');
+    expect(placed.byField['partsUsed.0.quantity']).toBe('Must be a whole number');
     expect(placed.unplaced).toEqual([]);
   });
 
@@ -32,7 +32,7 @@ describe('placeProblems', () => {
       steps,
     );
     expect(placed.unplaced.map((p) => p.field)).toEqual(['version', 'steps.gone.done']);
-    expect(placed.byField['steps.inspect.acknowledged']).toBe('read the cautions first. Tick it.');
+    expect(placed.byField['steps.inspect.acknowledged']).toBe('Read the cautions first. Tick it.');
     expect(placed.first?.field).toBe('steps.inspect.acknowledged');
   });
 

@@ -43,8 +43,9 @@ export function placeProblems(problems: readonly FieldProblem[], stepKeys: reado
       unplaced.push(problem);
       return;
     }
-    // Several messages for one field read as one.
-    byField[problem.field] = byField[problem.field] ? `${byField[problem.field]} ${problem.message}` : problem.message;
+    // Several messages for one field read as one; each starts as a sentence.
+    const sentence = problem.message.charAt(0).toUpperCase() + problem.message.slice(1);
+    byField[problem.field] = byField[problem.field] ? `${byField[problem.field]} ${sentence}` : sentence;
     // Steps in order, then parts used; within a step, in the server's order.
     placed.push({ problem, order: (stepIndex >= 0 ? stepIndex : stepKeys.length) * 10_000 + index });
   });

@@ -11,6 +11,7 @@ function timeOf(iso: string, locale: LocaleSettings | undefined) {
 }
 
 export function SaveStatus({ state, locale, onRetry }: { state: AutosaveState; locale?: LocaleSettings; onRetry: () => void }) {
+  const conflict = state.status.kind === 'conflict';
   const s = state.status;
   let icon = <CloudCheck aria-hidden className="size-5 text-running" />;
   let text = state.savedAt ? `Saved ${timeOf(state.savedAt, locale)}` : 'Saved';
@@ -43,14 +44,36 @@ export function SaveStatus({ state, locale, onRetry }: { state: AutosaveState; l
           Retry now
         </button>
       )}
+      {conflict && (
+        <button
+          type="button"
+          className="min-h-11 shrink-0 rounded-md px-2 text-sm font-bold underline"
+          // The choice sits at the top of the job; the technician may be far down a long list of readings.
+          onClick={() => {
+            const panel = document.getElementById(CONFLICT_PANEL_ID);
+            panel?.scrollIntoView({ block: 'start' });
+            panel?.focus({ preventScroll: true });
+          }}
+        >
+          Choose
+        </button>
+      )}
     </div>
   );
 }
 
+const CONFLICT_PANEL_ID = 'bench-conflict';
+
 export function ConflictPanel({ autosave, state }: { autosave: Autosave; state: AutosaveState }) {
   if (!state.conflict) return null;
   return (
-    <section role="alert" aria-labelledby="conflict-title" className="grid gap-3 rounded-lg border-2 border-down bg-down-tint p-4">
+    <section
+      id={CONFLICT_PANEL_ID}
+      tabIndex={-1}
+      role="alert"
+      aria-labelledby="conflict-title"
+      className="grid gap-3 rounded-lg border-2 border-down bg-down-tint p-4"
+    >
       <h2 id="conflict-title" className="flex items-center gap-2 text-lg font-extrabold text-down">
         <TriangleAlert aria-hidden className="size-5" /> Changed on another device
       </h2>

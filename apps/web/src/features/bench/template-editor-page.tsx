@@ -76,6 +76,11 @@ function TemplateEditor({ template }: { template: BenchTemplate | null }) {
             Back without saving
           </Link>
         }
+        actions={
+          <button type="submit" className="btn-primary" disabled={save.isPending}>
+            <Save aria-hidden className="size-4" /> {save.isPending ? 'Saving…' : 'Save'}
+          </button>
+        }
       />
       {formError && (
         <p role="alert" className="rounded-md border-2 border-down bg-down-tint p-3 font-semibold text-down">

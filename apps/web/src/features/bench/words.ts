@@ -20,6 +20,6 @@ export const recordHints: Record<StepRecordKind, string> = {
   fuse: 'Type the marking of the fuse you fitted, as printed (T2.5A 250V).',
   power: 'With the board running, measure the volts across each resistor.',
   parts_used: 'List each part you fitted, from the parts list or in your own words.',
-  photo: 'Take or upload a photo.',
+  photo: '',
   note: 'Write what you found.',
 };
