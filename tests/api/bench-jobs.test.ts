@@ -240,6 +240,11 @@ describe('opening a bench job', () => {
     expect(job.parts.find((p) => p.designator === 'R1')).toMatchObject({ id: part.R1, value: '600', tolerance: '10%' });
     expect(job.gameId).toBe(company.gameIds[0]);
     expect(job.openedBy).toBe('Delta Coin Technician');
+
+    // The list says who opened each job by id, so the bench page can put the signed-in person's own first.
+    const me = (await technician.get('/api/account/me').expect(200)).body as { user: { id: string } };
+    const list = benchJobPage.parse((await technician.get('/api/bench-jobs').query({ state: 'in_progress' }).expect(200)).body);
+    expect(list.items.find((i) => i.id === job.id)?.openedByUserId).toBe(me.user.id);
   });
 
   it('from a service call on the board’s game, and refuses a call on another game', async () => {

@@ -27,6 +27,8 @@ let statements: StatementLog;
 let largest: { tenantId: string; people: Record<'owner' | 'dispatcher' | 'technician', { id: string; email: string }> };
 const agents: Partial<Record<'owner' | 'dispatcher' | 'technician', Agent>> = {};
 let sample: { callId: string; gameId: string; venueId: string };
+/** The bench's heaviest rows at the largest company: its 400-part board, the board with the most readings, the job with the most. */
+let bench: { modelId: string; boardId: string; instanceId: string; gameId: string; jobId: string; openJobId: string; templateId: string };
 let companyTables: Set<string>;
 /** 4 pages of 8 kB. */
 const FEW_PAGES = 4;
@@ -59,6 +61,36 @@ beforeAll(async () => {
     )
   ).rows;
   sample = { callId: row!.call_id, gameId: row!.game_id, venueId: row!.venue_id };
+  const one = async <T>(query: ReturnType<typeof sql>) => (await t.db.owner.execute(query)).rows[0] as T;
+  const board = await one<{ id: string; model_id: string; parts: number }>(
+    sql`select b.id, b.model_id, count(*)::int as parts from model_boards b
+        join board_parts p on p.tenant_id = b.tenant_id and p.board_id = b.id and p.removed_at is null
+        where b.tenant_id = ${largest.tenantId} group by b.id, b.model_id order by parts desc, b.id limit 1`,
+  );
+  expect(board.parts).toBe(400);
+  const instance = await one<{ id: string; game_id: string }>(
+    sql`select i.id, i.game_id from board_instances i where i.tenant_id = ${largest.tenantId} and i.game_id is not null
+        order by (select count(*) from part_readings r where r.tenant_id = i.tenant_id and r.board_instance_id = i.id) desc, i.id limit 1`,
+  );
+  const job = await one<{ id: string }>(
+    sql`select bench_job_id as id from part_readings where tenant_id = ${largest.tenantId} and bench_job_id is not null
+        group by bench_job_id order by count(*) desc, bench_job_id limit 1`,
+  );
+  const openJob = await one<{ id: string }>(
+    sql`select id from bench_jobs where tenant_id = ${largest.tenantId} and state = 'in_progress' order by opened_at desc limit 1`,
+  );
+  const template = await one<{ id: string }>(
+    sql`select id from bench_templates where tenant_id = ${largest.tenantId} order by name, id limit 1`,
+  );
+  bench = {
+    modelId: board.model_id,
+    boardId: board.id,
+    instanceId: instance.id,
+    gameId: instance.game_id,
+    jobId: job.id,
+    openJobId: openJob.id,
+    templateId: template.id,
+  };
   // Company tables bigger than a few pages: one of a few pages (a handful of invitations across every
   // company) is read faster whole than through an index, and the planner rightly does so.
   companyTables = new Set(
@@ -70,7 +102,13 @@ beforeAll(async () => {
       )
     ).rows.map((r) => r.table_name),
   );
-  expect([...companyTables]).toEqual(expect.arrayContaining(['service_calls', 'call_events', 'call_photos', 'games', 'venues', 'outbox']));
+  expect([...companyTables]).toEqual(
+    expect.arrayContaining([
+      ...['service_calls', 'call_events', 'call_photos', 'games', 'venues', 'outbox'],
+      ...['model_boards', 'board_parts', 'board_instances', 'cabinet_profiles', 'part_readings'],
+      ...['bench_templates', 'bench_jobs', 'bench_job_parts_used', 'bench_job_photos'],
+    ]),
+  );
 
   statements = recordStatements();
 }, 600_000);
@@ -135,12 +173,38 @@ describe('query plans at scale, as the app role under row-level security', () =>
     ['owner', '/api/venues/:venue'],
     ['dispatcher', '/api/technicians'],
     ['owner', '/api/team'],
-    ['technician', '/api/bench-templates'],
-    ['technician', '/api/bench-jobs?state=in_progress'],
+    ['technician', '/api/parts-lists'],
+    ['technician', '/api/models/:model/boards'],
+    ['technician', '/api/boards/:board'],
+    ['technician', '/api/boards/:board/parts.csv'],
     ['technician', '/api/games/:game/boards'],
+    ['technician', '/api/games/:benchGame/boards'],
+    ['technician', '/api/games/:benchGame/cabinet-profile'],
+    ['technician', '/api/board-instances/:instance'],
     ['technician', '/api/recap-due'],
+    ['technician', '/api/recap-due?status=overdue'],
+    ['technician', '/api/bench-jobs'],
+    ['technician', '/api/bench-jobs?state=in_progress&limit=100'],
+    ['technician', '/api/bench-jobs?state=finished&limit=10'],
+    ['technician', '/api/bench-jobs?boardInstanceId=:instance'],
+    ['technician', '/api/bench-jobs?state=in_progress&boardInstanceId=:instance&limit=10'],
+    ['technician', '/api/bench-jobs/:job'],
+    ['technician', '/api/bench-jobs/:openJob'],
+    ['technician', '/api/bench-templates'],
+    ['technician', '/api/bench-templates/:template'],
   ];
-  const resolve = (path: string) => path.replace(':call', sample.callId).replace(':game', sample.gameId).replace(':venue', sample.venueId);
+  const resolve = (path: string) =>
+    path
+      .replace(':call', sample.callId)
+      .replace(':benchGame', bench.gameId)
+      .replace(':game', sample.gameId)
+      .replace(':venue', sample.venueId)
+      .replace(':model', bench.modelId)
+      .replace(':board', bench.boardId)
+      .replace(':instance', bench.instanceId)
+      .replace(':openJob', bench.openJobId)
+      .replace(':job', bench.jobId)
+      .replace(':template', bench.templateId);
 
   it.each(reads)('%s GET %s reads company tables only through indexes', async (role, path) => {
     const found = await readsOf(agents[role]!, resolve(path));
@@ -153,6 +217,21 @@ describe('query plans at scale, as the app role under row-level security', () =>
         `${read.text}\n${outline(plan)}`,
       ).toEqual([]);
     }
+  });
+
+  it('the recap list judges the whole fleet from two reads beside the company’s date, however many boards it has', async () => {
+    const found = await readsOf(agents.technician!, '/api/recap-due');
+    const [{ boards }] = (
+      await t.db.owner.execute<{ boards: number }>(
+        sql`select count(*)::int as boards from board_instances where tenant_id = ${largest.tenantId}`,
+      )
+    ).rows as [{ boards: number }];
+    expect(boards).toBeGreaterThan(3000);
+    // The company's date (its time zone), the boards with their games, venues and cabinet days, the electrolytics.
+    expect(
+      found.map((r) => r.text.slice(0, 120)),
+      'one statement per board, or per table, would show here',
+    ).toHaveLength(3);
   });
 
   it('the open-calls list walks the partial index of open calls in target order, and stops at the page', async () => {

@@ -1,8 +1,11 @@
 // The scale data, loaded small: what it says it loaded is what is there, its rows agree with each other the
-// way the service-call workflow keeps them, its people can sign in, and the same seed loads the same rows.
+// way the service-call workflow and the bench keep them, its people can sign in, and the same seed loads the same rows.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sql } from 'drizzle-orm';
 import { callStateGroups } from '@bumperline/contracts/calls';
+import type { BenchJobDraft, BenchStep } from '@bumperline/contracts/bench-vocabulary';
+import { evaluateBenchJob, judgeReading } from '@bumperline/domain/components/bench-judgement';
+import { checkPartsList, readPartEntry, type PartEntryInput } from '@bumperline/domain/components/parts-list-entry';
 import { seedScale, type ScaleResult } from '@bumperline/db/scale/scale-seed';
 import { freshDatabase, type TestDatabase } from '../support/database.ts';
 
@@ -18,6 +21,15 @@ afterAll(() => db.drop());
 
 const rows = async <T>(query: ReturnType<typeof sql>) => (await db.owner.execute(query)).rows as T[];
 const inList = (states: readonly string[]) => sql.raw(states.map((s) => `'${s}'`).join(', '));
+function groupBy<T>(items: readonly T[], key: (item: T) => string): Map<string, T[]> {
+  const groups = new Map<string, T[]>();
+  for (const item of items) {
+    const group = groups.get(key(item));
+    if (group) group.push(item);
+    else groups.set(key(item), [item]);
+  }
+  return groups;
+}
 
 describe('scale seed', () => {
   it('loads the rows it reports, the largest company first', async () => {
@@ -82,13 +94,103 @@ describe('scale seed', () => {
     expect(byStatus.sent).toBeGreaterThan(0.9 * result.rows.outbox!);
   });
 
+  it('gives every model 1–3 boards with parts lists, and fits a power supply in most games', async () => {
+    const perModel = await rows<{ boards: number; power_supplies: number }>(sql`
+      select count(b.id)::int as boards, count(b.id) filter (where b.name = 'Power supply')::int as power_supplies
+      from game_models m left join model_boards b on b.tenant_id = m.tenant_id and b.model_id = m.id group by m.tenant_id, m.id`);
+    expect(perModel.length).toBeGreaterThan(0);
+    for (const m of perModel) {
+      expect(m.boards).toBeGreaterThanOrEqual(1);
+      expect(m.boards).toBeLessThanOrEqual(3);
+      expect(m.power_supplies).toBe(1);
+    }
+    const [largest] = await rows<{ big_boards: number }>(sql`
+      select count(*)::int as big_boards from model_boards b where b.tenant_id = ${result.largestTenantId}
+        and (select count(*) from board_parts p where p.tenant_id = b.tenant_id and p.board_id = b.id and p.removed_at is null) = 400`);
+    expect(largest!.big_boards).toBeGreaterThanOrEqual(1);
+    const [fitted] = await rows<{ games: number; with_power_supply: number }>(sql`
+      select count(*)::int as games,
+             count(*) filter (where exists (select 1 from board_instances i join model_boards b on b.tenant_id = i.tenant_id and b.id = i.board_id
+                                            where i.tenant_id = g.tenant_id and i.game_id = g.id and b.name = 'Power supply'))::int as with_power_supply
+      from games g where g.retired_at is null`);
+    expect(fitted!.with_power_supply).toBeGreaterThan(0.8 * fitted!.games);
+    // A board fitted in a game is one of its model's boards.
+    const misfits = await rows<{ id: string }>(sql`
+      select i.id from board_instances i join games g on g.tenant_id = i.tenant_id and g.id = i.game_id
+      join model_boards b on b.tenant_id = i.tenant_id and b.id = i.board_id where b.model_id <> g.model_id`);
+    expect(misfits).toEqual([]);
+  });
+
+  it('writes parts lists the domain reads without a problem', async () => {
+    const parts = await rows<PartEntryInput & { board_id: string }>(sql`
+      select board_id, designator, kind, value, tolerance, rating, rated_temperature_c as "ratedTemperatureC",
+             rated_life_hours as "ratedLifeHours", notes
+      from board_parts where removed_at is null order by board_id, position`);
+    const byBoard = groupBy(parts, (p) => p.board_id);
+    expect(byBoard.size).toBe(result.rows.model_boards);
+    for (const [boardId, list] of byBoard) expect({ boardId, problems: checkPartsList(list) }).toEqual({ boardId, problems: [] });
+  });
+
+  it('stores each reading with the verdict the domain gives it, and dates boards sensibly', async () => {
+    const readings = await rows<PartEntryInput & { measured_text: string; in_circuit: boolean; verdict: string; min: number }>(sql`
+      select p.designator, p.kind, p.value, p.tolerance, p.rating, p.rated_temperature_c as "ratedTemperatureC",
+             p.rated_life_hours as "ratedLifeHours", r.measured_text, r.in_circuit, r.verdict, r.min
+      from part_readings r join board_parts p on p.tenant_id = r.tenant_id and p.id = r.part_id where r.measured is not null`);
+    expect(readings.length).toBeGreaterThan(1000);
+    const verdicts = new Set<string>();
+    for (const r of readings) {
+      const judged = judgeReading(readPartEntry(r), r.measured_text, r.in_circuit);
+      expect(judged.ok && { verdict: judged.value.verdict, min: judged.value.min }).toEqual({ verdict: r.verdict, min: r.min });
+      verdicts.add(r.verdict);
+    }
+    // Most parts pass; a few have drifted out.
+    expect([...verdicts].sort()).toEqual(expect.arrayContaining(['high', 'pass']));
+    const badDates = await rows<{ id: string }>(sql`
+      select id from board_instances where last_recap_on > ${options.now.toISOString().slice(0, 10)}::date or last_recap_on < made_on
+        or (made_on is not null and date_code_flag is not null)`);
+    expect(badDates).toEqual([]);
+  });
+
+  it('writes bench jobs the way finishing them would: a draft with no problem, its readings and parts used', async () => {
+    const jobs = await rows<{
+      id: string;
+      board_id: string;
+      state: string;
+      steps: BenchStep[];
+      draft: BenchJobDraft;
+      readings: number;
+      used: number;
+    }>(sql`
+      select j.id, i.board_id, j.state, j.steps, j.draft,
+             (select count(*)::int from part_readings r where r.tenant_id = j.tenant_id and r.bench_job_id = j.id) as readings,
+             (select count(*)::int from bench_job_parts_used u where u.tenant_id = j.tenant_id and u.job_id = j.id) as used
+      from bench_jobs j join board_instances i on i.tenant_id = j.tenant_id and i.id = j.board_instance_id`);
+    const states = groupBy(jobs, (j) => j.state);
+    expect(states.get('finished')!.length).toBeGreaterThan(states.get('in_progress')!.length);
+    const parts = await rows<PartEntryInput & { id: string; board_id: string }>(sql`
+      select id, board_id, designator, kind, value, tolerance, rating, rated_temperature_c as "ratedTemperatureC",
+             rated_life_hours as "ratedLifeHours" from board_parts where removed_at is null`);
+    const partsOf = groupBy(parts, (p) => p.board_id);
+    for (const job of states.get('finished')!) {
+      const specs = partsOf.get(job.board_id)!.map((p) => ({ ...readPartEntry(p), id: p.id }));
+      const evaluation = evaluateBenchJob({ steps: job.steps, draft: job.draft, parts: specs });
+      expect({ job: job.id, problems: evaluation.problems }).toEqual({ job: job.id, problems: [] });
+      expect(job.readings).toBe(evaluation.readings.length + evaluation.diodeSets.length);
+      expect(job.used).toBe(job.draft.partsUsed.length);
+    }
+    for (const job of states.get('in_progress')!) expect(job.readings).toBe(0);
+  });
+
   it('loads the same rows from the same seed', async () => {
     const other = await freshDatabase();
     try {
       await seedScale({ ...options, ownerUrl: other.ownerUrl, analyze: false });
-      const fingerprint = async (d: TestDatabase) =>
+      const fingerprint = async (d: TestDatabase) => [
         (await d.owner.execute(sql`select md5(string_agg(id::text || state || opened_at::text, ',' order by id)) as f from service_calls`))
-          .rows[0];
+          .rows[0],
+        (await d.owner.execute(sql`select md5(string_agg(id::text || measured_text || verdict, ',' order by id)) as f from part_readings`))
+          .rows[0],
+      ];
       expect(await fingerprint(other)).toEqual(await fingerprint(db));
     } finally {
       await other.drop();

@@ -13,6 +13,9 @@
  *   (c) floors: Node's http hello-world, Express 5's, and /api/health without and with a session.
  * 10 concurrent clients throughout (autocannon for HTTP). The API runs in a child process as main.ts builds it
  * (without the scheduled jobs), asked for gzip like a browser.
+ * The bench's reads use the company's heaviest rows: its longest parts list (400 parts at the largest company), the
+ * board with the most readings, the finished job with the most readings. BENCH_ONLY=<text>[,<text>…] measures only
+ * the endpoints whose names contain one of them (BENCH_ONLY=bench for the bench's).
  */
 import { randomBytes } from 'node:crypto';
 import pg from 'pg';
@@ -28,6 +31,8 @@ import { captureStatements } from './support/statement-capture.ts';
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 5);
 const RUNS = Number(process.env.BENCH_RUNS ?? 3);
 const CONNECTIONS = 10;
+/** BENCH_ONLY=bench,games: only the endpoints whose names contain one of these. */
+const ONLY = process.env.BENCH_ONLY?.split(',').filter(Boolean);
 const WARM_UP_SECONDS = Math.min(1, SECONDS);
 /** The issue's targets (issue 14), printed beside the figures. */
 const TARGET = { ratio: 2, listP95: 50, summaryP95: 250, healthRatio: 2 };
@@ -45,12 +50,24 @@ interface Company {
   games: number;
   ownerEmail: string;
   sample: { callId: string; gameId: string; venueId: string };
+  bench: BenchSample;
+}
+
+interface BenchSample {
+  modelId: string;
+  boardId: string;
+  boardParts: number;
+  instanceId: string;
+  instanceReadings: number;
+  gameId: string;
+  jobId: string;
+  templateId: string;
 }
 
 /** What the web app's screens ask for (apps/web/src/api and the screens' query files). */
 function endpointsFor(c: Company): Endpoint[] {
   const { callId, gameId, venueId } = c.sample;
-  return [
+  const all: Endpoint[] = [
     { name: 'account me', kind: 'detail', path: '/api/account/me' },
     { name: 'calls open (Today, 8)', kind: 'list', path: '/api/calls?state=open&sort=targetAt&order=asc&limit=8' },
     { name: 'calls open (table, 50)', kind: 'list', path: '/api/calls?state=open&sort=targetAt&order=asc&limit=50' },
@@ -74,7 +91,56 @@ function endpointsFor(c: Company): Endpoint[] {
     { name: 'activity (50)', kind: 'list', path: '/api/activity?limit=50' },
     { name: 'settings', kind: 'detail', path: '/api/settings' },
     { name: 'company', kind: 'detail', path: '/api/company' },
+    ...benchEndpointsFor(c.bench),
   ];
+  return ONLY ? all.filter((e) => ONLY.some((part) => e.name.includes(part))) : all;
+}
+
+/** The bench's screens: parts lists, a game's boards, a board's page, the recap list, the bench and a job. */
+function benchEndpointsFor(b: BenchSample): Endpoint[] {
+  return [
+    { name: 'bench: parts lists (every model)', kind: 'list', path: '/api/parts-lists' },
+    { name: 'bench: boards of a model', kind: 'list', path: `/api/models/${b.modelId}/boards` },
+    { name: `bench: parts list (${b.boardParts} parts)`, kind: 'detail', path: `/api/boards/${b.boardId}` },
+    { name: 'bench: boards of a game', kind: 'list', path: `/api/games/${b.gameId}/boards` },
+    { name: `bench: board page (${b.instanceReadings} readings)`, kind: 'detail', path: `/api/board-instances/${b.instanceId}` },
+    { name: 'bench: recap due (fleet)', kind: 'summary', path: '/api/recap-due' },
+    { name: 'bench: jobs in progress (100)', kind: 'list', path: '/api/bench-jobs?state=in_progress&limit=100' },
+    { name: 'bench: jobs finished (10)', kind: 'list', path: '/api/bench-jobs?state=finished&limit=10' },
+    { name: 'bench: jobs of a board', kind: 'list', path: `/api/bench-jobs?boardInstanceId=${b.instanceId}&limit=10` },
+    { name: 'bench: job (finished)', kind: 'detail', path: `/api/bench-jobs/${b.jobId}` },
+    { name: 'bench: templates', kind: 'list', path: '/api/bench-templates' },
+    { name: 'bench: template', kind: 'detail', path: `/api/bench-templates/${b.templateId}` },
+  ];
+}
+
+async function benchSample(client: pg.Client, tenantId: string): Promise<BenchSample> {
+  const one = async <T>(text: string) => (await client.query<T & pg.QueryResultRow>(text, [tenantId])).rows[0]!;
+  const board = await one<{ id: string; model_id: string; parts: number }>(
+    `select b.id, b.model_id, count(*)::int as parts from model_boards b
+     join board_parts p on p.tenant_id = b.tenant_id and p.board_id = b.id and p.removed_at is null
+     where b.tenant_id = $1 group by b.id, b.model_id order by parts desc, b.id limit 1`,
+  );
+  const instance = await one<{ id: string; game_id: string; readings: number }>(
+    `select i.id, i.game_id, count(r.id)::int as readings from board_instances i
+     left join part_readings r on r.tenant_id = i.tenant_id and r.board_instance_id = i.id
+     where i.tenant_id = $1 and i.game_id is not null group by i.id, i.game_id order by readings desc, i.id limit 1`,
+  );
+  const job = await one<{ id: string }>(
+    `select bench_job_id as id from part_readings where tenant_id = $1 and bench_job_id is not null
+     group by bench_job_id order by count(*) desc, bench_job_id limit 1`,
+  );
+  const template = await one<{ id: string }>(`select id from bench_templates where tenant_id = $1 order by name, id limit 1`);
+  return {
+    modelId: board.model_id,
+    boardId: board.id,
+    boardParts: board.parts,
+    instanceId: instance.id,
+    instanceReadings: instance.readings,
+    gameId: instance.game_id,
+    jobId: job.id,
+    templateId: template.id,
+  };
 }
 
 /** The largest company, and a small one of median size among the rest. */
@@ -111,6 +177,7 @@ async function pickCompanies(ownerUrl: string): Promise<[Company, Company]> {
           games: row.n,
           ownerEmail: owner.rows[0]!.email,
           sample: { callId: c.id, gameId: c.game_id, venueId: c.venue_id },
+          bench: await benchSample(client, row.tenant_id),
         };
       }),
     )) as [Company, Company];
@@ -187,14 +254,15 @@ try {
   const rowsB: Record<string, string>[] = [];
   for (const [i, e] of endpoints.entries()) {
     const big = apiLargest.get(e.name)!;
-    const little = await measureHttp(api.url + endpointsSmall[i]!.path, headersFor(cookies.small));
+    const smallEndpoint = endpointsSmall[i]!;
+    const little = await measureHttp(api.url + smallEndpoint.path, headersFor(cookies.small));
     const target = e.kind === 'list' ? TARGET.listP95 : e.kind === 'summary' ? TARGET.summaryP95 : undefined;
     rowsB.push({
       endpoint: e.name,
       kind: e.kind,
       'largest p50 / p95 / p99': `${ms(big.p50)} / ${ms(big.p95)} / ${ms(big.p99)}`,
       'target p95 (largest)': target === undefined ? '(none set)' : `< ${target} ms ${mark(big.p95 < target)}`,
-      'small p50 / p95 / p99': `${ms(little.p50)} / ${ms(little.p95)} / ${ms(little.p99)}${failed(little)}`,
+      'small p50 / p95 / p99': `${ms(little.p50)} / ${ms(little.p95)} / ${ms(little.p99)}${failed(little)}${smallEndpoint.name === e.name ? '' : ` (${smallEndpoint.name.replace(/^bench: /, '')})`}`,
     });
   }
   console.log(`\n(b) Latency per endpoint: largest company (${largest.games} games) and a small one (${small.games} games)`);

@@ -3,6 +3,7 @@
 // used written when it is finished).
 import { z } from 'zod';
 import { isoDateTime, pageOf, requiredText, rowVersion, shortText, uuid } from './common.ts';
+import { partRow } from './parts-lists.ts';
 import {
   benchJobOrigins,
   benchJobStates,
@@ -207,16 +208,7 @@ export const benchPhotoFields = z.strictObject({ stepKey: benchStepKey });
 // ---- Responses ----
 
 /** A line of the board's parts list, as written, with its id: the screen judges readings against it live. */
-export const benchJobPart = z.strictObject({
-  id: uuid,
-  designator: z.string(),
-  kind: z.enum(partKinds),
-  value: z.string(),
-  tolerance: z.string(),
-  rating: z.string(),
-  ratedTemperatureC: z.number().int().nullable(),
-  ratedLifeHours: z.number().int().nullable(),
-  notes: z.string(),
+export const benchJobPart = partRow.extend({
   /** Taken off the parts list since (kept on a finished job whose readings name it). */
   removed: z.boolean(),
 });
@@ -330,6 +322,8 @@ export const benchJobSummary = z.strictObject({
   state: z.enum(benchJobStates),
   templateName: z.string(),
   openedBy: z.string().nullable(),
+  /** Who opened it, to put the signed-in person's own jobs first (names can repeat). */
+  openedByUserId: uuid.nullable(),
   openedAt: isoDateTime,
   finishedBy: z.string().nullable(),
   finishedAt: isoDateTime.nullable(),

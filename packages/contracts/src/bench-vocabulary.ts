@@ -37,6 +37,18 @@ export type CautionKind = (typeof cautionKinds)[number];
 export const stepRecordKinds = ['check', 'readings', 'diode_set', 'fuse', 'power', 'parts_used', 'photo', 'note'] as const;
 export type StepRecordKind = (typeof stepRecordKinds)[number];
 
+/** A step's kind in words, on the screens and on the printed job sheet. */
+export const stepRecordLabels: Record<StepRecordKind, string> = {
+  check: 'Yes / no check',
+  readings: 'Readings',
+  diode_set: 'Diode test',
+  fuse: 'Fuse check',
+  power: 'Power check',
+  parts_used: 'Parts used',
+  photo: 'Photo',
+  note: 'Note',
+};
+
 export const benchJobStates = ['in_progress', 'finished'] as const;
 export type BenchJobState = (typeof benchJobStates)[number];
 
@@ -47,6 +59,10 @@ export type BenchJobOrigin = (typeof benchJobOrigins)[number];
 /** A stored reading's verdict: a value against its window, or a diode / bridge judged good or not. */
 export const readingVerdicts = ['pass', 'low', 'high', 'fail'] as const;
 export type ReadingVerdictWord = (typeof readingVerdicts)[number];
+
+/** A board's recap status, by the life left in its electrolytics (the recap list filters on it from the address bar). */
+export const recapStatuses = ['overdue', 'due-soon', 'ok', 'unknown', 'no-electrolytics'] as const;
+export type RecapStatus = (typeof recapStatuses)[number];
 
 /** One step of a bench-job template (kept as JSON on the template, copied onto each job when it opens). */
 export interface BenchStep {

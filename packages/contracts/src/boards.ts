@@ -1,8 +1,9 @@
 // Boards fitted in games (serial, date code as printed, last recap), every reading taken on their parts, the
 // cabinet's temperature through the day, and when each board is due for a recap.
 import { z } from 'zod';
-import { readingVerdicts, benchJobStates, partKinds } from './bench-vocabulary.ts';
+import { readingVerdicts, benchJobStates, recapStatuses } from './bench-vocabulary.ts';
 import { isoDate, isoDateTime, rowVersion, shortText, uuid } from './common.ts';
+import { partRow } from './parts-lists.ts';
 
 // ---- A board in a game ----
 
@@ -20,8 +21,7 @@ export type BoardInstanceInput = z.input<typeof boardInstanceInput>;
 export const boardInstanceUpdate = boardInstanceInput.omit({ boardId: true }).partial().extend({ version: rowVersion });
 export type BoardInstanceUpdate = z.input<typeof boardInstanceUpdate>;
 
-export const recapStatuses = ['overdue', 'due-soon', 'ok', 'unknown', 'no-electrolytics'] as const;
-export type RecapStatus = (typeof recapStatuses)[number];
+export { recapStatuses, type RecapStatus } from './bench-vocabulary.ts';
 
 /** When a board wants its electrolytics replaced, and why. */
 export const recapEstimate = z.strictObject({
@@ -96,15 +96,8 @@ export const partReadingPoint = z.strictObject({
 });
 export type PartReadingPoint = z.infer<typeof partReadingPoint>;
 
-export const boardPartHistory = z.strictObject({
+export const boardPartHistory = partRow.omit({ id: true, notes: true }).extend({
   partId: uuid,
-  designator: z.string(),
-  kind: z.enum(partKinds),
-  value: z.string(),
-  tolerance: z.string(),
-  rating: z.string(),
-  ratedTemperatureC: z.number().int().nullable(),
-  ratedLifeHours: z.number().int().nullable(),
   /** Taken off the parts list since; kept because readings were taken on it. */
   removed: z.boolean(),
   /** Oldest first. */

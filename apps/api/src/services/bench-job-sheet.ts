@@ -3,8 +3,8 @@
 // words, not only by weight), diode sets, fuse and power checks, parts used, photo thumbnails, who and when.
 import type { BenchJob, BenchReading } from '@bumperline/contracts/bench-jobs';
 import { cautionsDeferral } from '@bumperline/contracts/bench-cautions';
-import { formatDeviation } from '@bumperline/domain/components/bench-judgement';
-import { formatQuantity, type Unit } from '@bumperline/domain/components/values';
+import { stepRecordLabels } from '@bumperline/contracts/bench-vocabulary';
+import { formatDeviation, storedReadingText } from '@bumperline/domain/components/bench-judgement';
 import {
   cautionsAcknowledged,
   contentWidth,
@@ -27,17 +27,6 @@ export interface JobSheetInput {
   thumbnails: Map<string, Buffer>;
 }
 
-const RECORD_WORDS: Record<BenchJob['steps'][number]['record'], string> = {
-  check: 'Check',
-  readings: 'Readings',
-  diode_set: 'Diode test',
-  fuse: 'Fuse check',
-  power: 'Power check',
-  parts_used: 'Parts used',
-  photo: 'Photo',
-  note: 'Note',
-};
-
 /** The verdict in words, so it reads the same on a black-and-white printout. */
 export function verdictWords(r: Pick<BenchReading, 'verdict' | 'indicative'>): string {
   if (r.verdict === 'pass') return 'Pass';
@@ -50,16 +39,11 @@ export function verdictWords(r: Pick<BenchReading, 'verdict' | 'indicative'>): s
 const outOfTolerance = (r: BenchReading) => r.verdict !== 'pass' && !r.indicative;
 const strong = (text: string, on: boolean): Cell => (on ? { text, font: { src: 'bold' } } : text);
 
-function readingShown(r: BenchReading): string {
-  if (r.measured === null || !r.unit) return r.measuredText;
-  return formatQuantity(r.measured, r.unit as Unit, { significantDigits: 6 });
-}
-
 function readingRow(r: BenchReading): Cell[] {
   const flagged = outOfTolerance(r);
   return [
     strong(flagged ? `✗ ${r.designator}` : r.designator, flagged),
-    strong(readingShown(r), flagged),
+    strong(storedReadingText(r), flagged),
     r.windowText ?? '',
     r.deviationPercent === null ? '' : formatDeviation(r.deviationPercent),
     r.inCircuit ? 'in circuit' : 'out of circuit',
@@ -152,7 +136,7 @@ export async function jobSheetPdf(input: JobSheetInput): Promise<Buffer> {
   if (out.length || refusedFuses.length || undersized.length) {
     heading(doc, 'Needs attention');
     for (const r of out) {
-      paragraph(doc, `✗ ${r.designator}: ${readingShown(r)} — ${verdictWords(r)}${r.windowText ? ` (allowed ${r.windowText})` : ''}`, {
+      paragraph(doc, `✗ ${r.designator}: ${storedReadingText(r)} — ${verdictWords(r)}${r.windowText ? ` (allowed ${r.windowText})` : ''}`, {
         bold: true,
       });
     }
@@ -165,7 +149,7 @@ export async function jobSheetPdf(input: JobSheetInput): Promise<Buffer> {
     heading(doc, `${i + 1}. ${step.title}`);
     paragraph(
       doc,
-      `${RECORD_WORDS[step.record]} · ${progress?.done ? '✓ Done' : '✗ Not done'}${progress?.answer ? ` · Answer: ${progress.answer}` : ''}`,
+      `${stepRecordLabels[step.record]} · ${progress?.done ? '✓ Done' : '✗ Not done'}${progress?.answer ? ` · Answer: ${progress.answer}` : ''}`,
       { bold: true, size: 9 },
     );
     if (step.instructions) paragraph(doc, step.instructions, { muted: true, size: 9 });

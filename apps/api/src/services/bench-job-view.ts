@@ -57,9 +57,26 @@ function stepOfPart(draft: BenchJobDraft, partId: string): string {
   return '';
 }
 
+/**
+ * The fuse and power checks of a finished job, judged again from its frozen draft. Only those steps, and the parts
+ * they may concern (of their kinds or named by them), are read: readings and diode sets are stored rows already, and
+ * reading every line of a long parts list again on each view was most of the work of showing a job.
+ */
+function judgeChecks(job: BenchJobRow, parts: readonly BenchJobPart[]): BenchEvaluation {
+  const steps = job.steps.filter((s) => s.record === 'fuse' || s.record === 'power');
+  const kinds = new Set<string>(steps.flatMap((s) => s.partKinds));
+  const named = new Set(steps.flatMap((s) => s.designators.map((d) => d.trim().toUpperCase())));
+  const concerned = parts.filter((p) => kinds.has(p.kind) || named.has(p.designator.toUpperCase()));
+  const draft = {
+    ...job.draft,
+    steps: Object.fromEntries(steps.flatMap((s) => (job.draft.steps[s.key] ? [[s.key, job.draft.steps[s.key]!]] : []))),
+  };
+  return judgeBenchDraft(steps, draft, concerned);
+}
+
 async function evaluationOf(tx: Tx, job: BenchJobRow, parts: BenchJobPart[]): Promise<BenchJobEvaluation> {
   const stored = await listReadingsOfBenchJob(tx, job.id);
-  const judged = judgeBenchDraft(job.steps, job.draft, parts);
+  const judged = judgeChecks(job, parts);
   const specified = new Map(parts.map((p) => [p.id, p.value]));
   return {
     readings: stored.map((r) => ({

@@ -3,7 +3,7 @@
 import type { BenchJobPhoto } from '@bumperline/contracts/bench-jobs';
 import type { Tx } from '@bumperline/db/client';
 import { getBenchJob, insertBenchJobPhoto } from '@bumperline/db/queries/bench-jobs';
-import type { PreparedPhoto } from './photo-intake.ts';
+import { storePreparedPhoto, type PreparedPhoto } from './photo-intake.ts';
 import type { PhotoStore } from './photo-store.ts';
 import { benchPhotoUrl, benchThumbUrl } from './bench-job-view.ts';
 import { Conflict, InvalidInput, NotFound } from './workflow-errors.ts';
@@ -22,21 +22,8 @@ export async function addBenchPhoto(
   if (job.state === 'finished') throw new Conflict('This bench job is finished: its record can no longer change.');
   if (!job.steps.some((s) => s.key === p.stepKey))
     throw new InvalidInput([{ field: 'stepKey', message: 'is not a step of this bench job' }]);
-  const storageKey = await store.write(p.photo.photo, 'jpg');
-  p.written.push(storageKey);
-  const thumbKey = await store.write(p.photo.thumb, 'webp');
-  p.written.push(thumbKey);
-  const row = await insertBenchJobPhoto(tx, {
-    jobId: job.id,
-    stepKey: p.stepKey,
-    storageKey,
-    thumbKey,
-    contentType: p.photo.contentType,
-    bytes: p.photo.photo.length,
-    width: p.photo.width,
-    height: p.photo.height,
-    uploadedBy: p.uploadedBy,
-  });
+  const stored = await storePreparedPhoto(store, p.photo, p.written);
+  const row = await insertBenchJobPhoto(tx, { jobId: job.id, stepKey: p.stepKey, ...stored, uploadedBy: p.uploadedBy });
   return {
     id: row.id,
     stepKey: p.stepKey,

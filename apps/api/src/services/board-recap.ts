@@ -1,7 +1,7 @@
 // When a board is due for a recap, worked out by the domain (capacitor-life.ts) from its electrolytics, its game's
 // cabinet profile and the date the clock runs from (its last recap, or else the date its date code reads as).
 import type { RecapEstimate } from '@bumperline/contracts/boards';
-import { recapDueWithProfile } from '@bumperline/domain/components/capacitor-life';
+import { profileLives, recapDueFromLives, type ProfileLife } from '@bumperline/domain/components/capacitor-life';
 import { DomainError } from '@bumperline/domain/errors';
 
 export interface CabinetSliceRow {
@@ -63,15 +63,49 @@ function cannotTell(
   };
 }
 
+/** Each rated electrolytic's life in the cabinet (the domain's profileLives, or a list's remembered answer). */
+export type LivesInCabinet = (
+  capacitors: readonly { ratedTemperatureC: number; ratedLifeHours: number }[],
+  slices: readonly CabinetSliceRow[],
+) => ProfileLife[];
+
+const livesInCabinet: LivesInCabinet = (capacitors, slices) => profileLives({ capacitors, slices });
+
+/**
+ * The lives of each board design's electrolytics per cabinet day, worked out once for a whole list: the boards of
+ * one design in cabinets with the same day (or with none, the assumed day) share them, and working them out is most
+ * of the cost of judging a board. A refusal (a cabinet hotter than a part's rating) is remembered too.
+ */
+export function rememberedLives(): (boardId: string) => LivesInCabinet {
+  const known = new Map<string, ProfileLife[] | Error>();
+  return (boardId) => (capacitors, slices) => {
+    const key = `${boardId} ${slices.map((s) => `${s.hours}h@${s.temperatureC}`).join(',')}`;
+    let lives = known.get(key);
+    if (lives === undefined) {
+      try {
+        lives = livesInCabinet(capacitors, slices);
+      } catch (err) {
+        if (!(err instanceof Error)) throw err;
+        lives = err;
+      }
+      known.set(key, lives);
+    }
+    if (lives instanceof Error) throw lives;
+    return lives;
+  };
+}
+
 /**
  * The board's recap estimate as of `today` (the company's date). A board whose date is unknown or reads two ways
- * is "unknown" with what to settle: the date is never guessed.
+ * is "unknown" with what to settle: the date is never guessed. `lives` gives the electrolytics' lives in the cabinet;
+ * a list of many boards passes one that remembers them per board (rememberedLives).
  */
 export function estimateRecap(
   board: RecapSubject,
   electrolytics: readonly ElectrolyticRow[],
   profile: { slices: readonly CabinetSliceRow[]; isDefault: boolean },
   today: string,
+  lives: LivesInCabinet = livesInCabinet,
 ): RecapEstimate {
   const defaultProfile = profile.isDefault;
   if (electrolytics.length === 0) {
@@ -112,7 +146,7 @@ export function estimateRecap(
 
   let due;
   try {
-    due = recapDueWithProfile({ from: start, capacitors: rated, slices: profile.slices, asOf: today });
+    due = recapDueFromLives({ from: start, lives: lives(rated, profile.slices), asOf: today });
   } catch (err) {
     // A cabinet hotter than a part's rating, or a start after today: say so rather than guess a date.
     if (err instanceof DomainError) {

@@ -30,7 +30,7 @@ import { getModelBoard, listModelBoards } from '@bumperline/db/queries/model-boa
 import { listReadingsOfBoardInstance } from '@bumperline/db/queries/part-readings';
 import { parseManufactureDate } from '@bumperline/domain/components/date-codes';
 import { DomainError } from '@bumperline/domain/errors';
-import { DEFAULT_CABINET_SLICES, estimateRecap, type CabinetSliceRow, type ElectrolyticRow } from './board-recap.ts';
+import { DEFAULT_CABINET_SLICES, estimateRecap, rememberedLives, type CabinetSliceRow, type ElectrolyticRow } from './board-recap.ts';
 import { Conflict, InvalidInput, NotFound } from './workflow-errors.ts';
 
 type Field = { field: string; message: string };
@@ -76,13 +76,18 @@ interface RecapInputs {
   profiles: Map<string, CabinetSliceRow[]>;
 }
 
-async function recapInputs(tx: Tx, boardIds: string[], gameIds: string[] | undefined): Promise<RecapInputs> {
+async function electrolyticsByBoard(tx: Tx, boardIds: string[]): Promise<RecapInputs['electrolytics']> {
   const electrolytics = new Map<string, ElectrolyticRow[]>();
   for (const c of await listElectrolyticsOfBoards(tx, boardIds)) {
     const list = electrolytics.get(c.boardId) ?? [];
     list.push(c);
     electrolytics.set(c.boardId, list);
   }
+  return electrolytics;
+}
+
+async function recapInputs(tx: Tx, boardIds: string[], gameIds: string[]): Promise<RecapInputs> {
+  const electrolytics = await electrolyticsByBoard(tx, boardIds);
   const profiles = new Map((await listCabinetProfiles(tx, gameIds)).map((p) => [p.gameId, p.slices]));
   return { electrolytics, profiles };
 }
@@ -245,12 +250,16 @@ export function compareRecapRows(a: RecapFleetRow, b: RecapFleetRow): number {
  * electrolytics have nothing to recap: they are listed only when asked for by that status.
  */
 export async function recapFleet(tx: Tx, today: string, status: RecapStatus | undefined): Promise<RecapFleet> {
+  // Two statements: the boards with their games' cabinet days, then the electrolytics of the boards' designs.
   const rows = await listFleetBoardInstances(tx);
-  const inputs = await recapInputs(
-    tx,
-    rows.map((r) => r.boardId),
-    undefined,
-  );
+  const inputs: RecapInputs = {
+    electrolytics: await electrolyticsByBoard(
+      tx,
+      rows.map((r) => r.boardId),
+    ),
+    profiles: new Map(rows.flatMap((r) => (r.gameId && r.cabinetSlices ? [[r.gameId, r.cabinetSlices]] : []))),
+  };
+  const livesOf = rememberedLives();
   const all: RecapFleetRow[] = rows.map((r) => ({
     boardInstanceId: r.id,
     boardName: r.boardName,
@@ -261,7 +270,7 @@ export async function recapFleet(tx: Tx, today: string, status: RecapStatus | un
     gameLabel: r.gameSerial === null ? null : `${r.modelTitle} · ${r.gameSerial}`,
     venueId: r.venueId,
     venueName: r.venueName,
-    recap: estimateRecap(r, inputs.electrolytics.get(r.boardId) ?? [], profileFor(inputs, r.gameId), today),
+    recap: estimateRecap(r, inputs.electrolytics.get(r.boardId) ?? [], profileFor(inputs, r.gameId), today, livesOf(r.boardId)),
   }));
   const counts: RecapFleet['counts'] = {};
   for (const row of all) counts[row.recap.status] = (counts[row.recap.status] ?? 0) + 1;

@@ -73,17 +73,21 @@ export function title(doc: Doc, text: string, subtitle?: string): void {
   doc.fillColor('black').moveDown(0.6);
 }
 
-export function heading(doc: Doc, text: string): void {
-  keepSpace(doc, 60);
-  doc.moveDown(0.4);
-  doc.font('bold').fontSize(12).fillColor('black').text(text, MARGIN, doc.y);
-  const y = doc.y + 2;
+/** A thin line across the page at `y`. */
+function ruleAcross(doc: Doc, y: number): void {
   doc
     .moveTo(MARGIN, y)
     .lineTo(MARGIN + contentWidth(doc), y)
     .lineWidth(0.5)
     .strokeColor(RULE)
     .stroke();
+}
+
+export function heading(doc: Doc, text: string): void {
+  keepSpace(doc, 60);
+  doc.moveDown(0.4);
+  doc.font('bold').fontSize(12).fillColor('black').text(text, MARGIN, doc.y);
+  ruleAcross(doc, doc.y + 2);
   doc.moveDown(0.4);
 }
 
@@ -174,12 +178,7 @@ export function writingLines(doc: Doc, label: string, count: number): void {
   doc.fillColor('black');
   for (let i = 0; i < count; i++) {
     const y = doc.y + 16;
-    doc
-      .moveTo(MARGIN, y)
-      .lineTo(MARGIN + contentWidth(doc), y)
-      .lineWidth(0.5)
-      .strokeColor(RULE)
-      .stroke();
+    ruleAcross(doc, y);
     doc.y = y + 2;
   }
   doc.moveDown(0.5);

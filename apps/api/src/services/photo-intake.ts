@@ -127,27 +127,26 @@ export async function preparePhoto(bytes: Buffer): Promise<PreparedPhoto> {
   }
 }
 
+/**
+ * Writes a prepared photo and its thumbnail to the store; each key goes into `written` as it lands, so the caller
+ * can remove them if the transaction fails later. Returns what a photo row keeps of it.
+ */
+export async function storePreparedPhoto(store: PhotoStore, photo: PreparedPhoto, written?: string[]) {
+  const storageKey = await store.write(photo.photo, 'jpg');
+  written?.push(storageKey);
+  const thumbKey = await store.write(photo.thumb, 'webp');
+  written?.push(thumbKey);
+  return { storageKey, thumbKey, contentType: photo.contentType, bytes: photo.photo.length, width: photo.width, height: photo.height };
+}
+
 /** Stores a prepared photo and its thumbnail, and records it on the call and its timeline. */
 export async function savePhoto(
   tx: Tx,
   store: PhotoStore,
   p: { callId: string; photo: PreparedPhoto; uploadedBy: string; actorLabel: string; written?: string[] },
 ): Promise<string> {
-  // `written` collects the stored keys so the caller can remove them if the transaction fails later.
-  const storageKey = await store.write(p.photo.photo, 'jpg');
-  p.written?.push(storageKey);
-  const thumbKey = await store.write(p.photo.thumb, 'webp');
-  p.written?.push(thumbKey);
-  const photoId = await insertPhoto(tx, {
-    callId: p.callId,
-    storageKey,
-    thumbKey,
-    contentType: p.photo.contentType,
-    bytes: p.photo.photo.length,
-    width: p.photo.width,
-    height: p.photo.height,
-    uploadedBy: p.uploadedBy,
-  });
+  const stored = await storePreparedPhoto(store, p.photo, p.written);
+  const photoId = await insertPhoto(tx, { callId: p.callId, ...stored, uploadedBy: p.uploadedBy });
   await insertEvent(tx, { callId: p.callId, kind: 'photo', actorUserId: null, actorLabel: p.actorLabel, detail: { photoId } });
   return photoId;
 }

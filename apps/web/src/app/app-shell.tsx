@@ -1,5 +1,6 @@
 // The signed-in frame: our mark, the sections this role may open, the company switcher, sign out.
-import { NavLink, Outlet, useNavigate } from 'react-router-dom';
+import { useEffect, useRef } from 'react';
+import { NavLink, Outlet, useLocation, useNavigate } from 'react-router-dom';
 import { useQueryClient } from '@tanstack/react-query';
 import {
   Hourglass,
@@ -41,6 +42,20 @@ export function AppShell() {
   const switchCompany = useSwitchCompany();
   const role = me.data?.role;
   const visible = sections.filter((s) => !s.needs || can(role, s.needs));
+  const sectionList = useRef<HTMLUListElement>(null);
+  const { pathname } = useLocation();
+
+  // On a phone the sections scroll sideways: bring the current one into view, or nothing shows where you are.
+  useEffect(() => {
+    const list = sectionList.current;
+    const current = list?.querySelector<HTMLElement>('[aria-current="page"]');
+    if (!list || !current) return;
+    const link = current.getBoundingClientRect();
+    const frame = list.getBoundingClientRect();
+    if (link.left < frame.left || link.right > frame.right) {
+      list.scrollLeft += link.left - frame.left - (frame.width - link.width) / 2;
+    }
+  }, [pathname, visible.length]);
 
   return (
     <div className="min-h-screen">
@@ -95,7 +110,7 @@ export function AppShell() {
           </div>
         </div>
         <nav aria-label="Sections" className="border-t border-white/15">
-          <ul className="mx-auto flex max-w-[96rem] gap-1 overflow-x-auto px-2">
+          <ul ref={sectionList} className="mx-auto flex max-w-[96rem] gap-1 overflow-x-auto px-2">
             {visible.map((s) => (
               <li key={s.to}>
                 <NavLink

@@ -9,6 +9,15 @@ import { Loading } from '../components/states.tsx';
 import { prefetchStartPage, StartPage } from './start-page.tsx';
 import { LandingPage } from '../features/home/landing-page.tsx';
 import { prefetchCalls } from '../features/calls/calls-queries.ts';
+import { prefetchPartsList, prefetchPartsLists } from '../features/parts-lists/parts-lists-queries.ts';
+import { prefetchBoard, prefetchRecapDue } from '../features/boards/boards-queries.ts';
+import {
+  prefetchBench,
+  prefetchBenchJob,
+  prefetchBenchTemplate,
+  prefetchBenchTemplates,
+  prefetchNewBenchJob,
+} from '../features/bench/bench-queries.ts';
 import { NotFoundPage } from './not-found-page.tsx';
 import { RouteError } from './route-error.tsx';
 import { lazyPage } from './lazy-page.tsx';
@@ -130,24 +139,62 @@ export const router = createBrowserRouter([
             path: '/calls/:id',
             element: guard('calls:read', <CallPage />),
           },
-          { path: paths.partsLists, element: guard('bench:read', <PartsListsPage />) },
-          { path: '/parts-lists/:boardId', element: guard('bench:read', <PartsListPage />) },
+          {
+            path: paths.partsLists,
+            element: guard('bench:read', <PartsListsPage />),
+            loader: prefetching(prefetchPartsLists, PartsListsPage.preload),
+          },
+          {
+            path: '/parts-lists/:boardId',
+            element: guard('bench:read', <PartsListPage />),
+            loader: prefetching(prefetchPartsList, PartsListPage.preload),
+          },
           {
             path: '/boards/:id',
             element: guard('bench:read', <BoardPage />),
+            loader: prefetching(prefetchBoard, BoardPage.preload),
           },
           {
             path: paths.recapDue,
             element: guard('bench:read', <RecapDuePage />),
+            loader: prefetching(prefetchRecapDue, RecapDuePage.preload),
           },
-          { path: paths.bench, element: guard('bench:read', <BenchPage />) },
-          { path: '/bench/jobs/:id', element: guard('bench:read', <BenchJobPage />) },
-          { path: '/bench/jobs/:id/sheet', element: guard('bench:read', <JobSheetPage />) },
-          { path: '/bench/new/:boardInstanceId', element: guard('bench:work', <NewBenchJobPage />) },
-          { path: paths.benchTemplates(), element: guard('bench:read', <BenchTemplatesPage />) },
-          { path: paths.newBenchTemplate(), element: guard('bench-templates:write', <NewBenchTemplatePage />) },
-          { path: '/bench/templates/:id', element: guard('bench:read', <BenchTemplatePage />) },
-          { path: '/bench/templates/:id/edit', element: guard('bench-templates:write', <EditBenchTemplatePage />) },
+          { path: paths.bench, element: guard('bench:read', <BenchPage />), loader: prefetching(prefetchBench, BenchPage.preload) },
+          {
+            path: '/bench/jobs/:id',
+            element: guard('bench:read', <BenchJobPage />),
+            loader: prefetching(prefetchBenchJob, BenchJobPage.preload),
+          },
+          {
+            path: '/bench/jobs/:id/sheet',
+            element: guard('bench:read', <JobSheetPage />),
+            loader: prefetching(prefetchBenchJob, JobSheetPage.preload),
+          },
+          {
+            path: '/bench/new/:boardInstanceId',
+            element: guard('bench:work', <NewBenchJobPage />),
+            loader: prefetching(prefetchNewBenchJob, NewBenchJobPage.preload),
+          },
+          {
+            path: paths.benchTemplates(),
+            element: guard('bench:read', <BenchTemplatesPage />),
+            loader: prefetching(prefetchBenchTemplates, BenchTemplatesPage.preload),
+          },
+          {
+            path: paths.newBenchTemplate(),
+            element: guard('bench-templates:write', <NewBenchTemplatePage />),
+            loader: prefetching(() => {}, NewBenchTemplatePage.preload),
+          },
+          {
+            path: '/bench/templates/:id',
+            element: guard('bench:read', <BenchTemplatePage />),
+            loader: prefetching(prefetchBenchTemplate, BenchTemplatePage.preload),
+          },
+          {
+            path: '/bench/templates/:id/edit',
+            element: guard('bench-templates:write', <EditBenchTemplatePage />),
+            loader: prefetching(prefetchBenchTemplate, EditBenchTemplatePage.preload),
+          },
           {
             path: paths.settings,
             element: guard('settings:manage', <SettingsPage />),

@@ -9,9 +9,9 @@ import { useFitBoard, useGameBoards } from '../api/boards.ts';
 import { useLocaleSettings } from '../api/me.ts';
 import { useCan } from '../api/use-can.ts';
 import { ApiError } from '../lib/api-client.ts';
-import { dateCodeProblem } from '../lib/date-code-check.ts';
 import { formatDate } from '../lib/format.ts';
 import { paths } from '../lib/paths.ts';
+import { BoardFactsFields, boardFactsProblems, type BoardFactsDraft } from './board-facts-fields.tsx';
 import { CabinetProfileEditor } from './cabinet-profile-editor.tsx';
 import { Field, inputClass } from './field.tsx';
 import { recapLine, RecapStatusBadge } from './recap-status-badge.tsx';
@@ -109,9 +109,7 @@ function BoardLine({ board }: { board: BoardInstance }) {
 function FitBoardForm({ gameId, boards, onDone }: { gameId: string; boards: FittableBoard[]; onDone: () => void }) {
   const fit = useFitBoard(gameId);
   const [boardId, setBoardId] = useState(boards.length === 1 ? boards[0]!.id : '');
-  const [serial, setSerial] = useState('');
-  const [dateCode, setDateCode] = useState('');
-  const [lastRecapOn, setLastRecapOn] = useState('');
+  const [facts, setFacts] = useState<BoardFactsDraft>({ serial: '', dateCode: '', lastRecapOn: '' });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
 
@@ -122,14 +120,12 @@ function FitBoardForm({ gameId, boards, onDone }: { gameId: string; boards: Fitt
       onSubmit={(e) => {
         e.preventDefault();
         setFormError(null);
-        const problems: Record<string, string> = {};
+        const problems: Record<string, string> = boardFactsProblems(facts);
         if (!boardId) problems.boardId = 'pick which board this is';
-        const codeProblem = dateCodeProblem(dateCode);
-        if (codeProblem) problems.dateCode = codeProblem;
         setErrors(problems);
         if (Object.keys(problems).length) return;
         fit.mutate(
-          { boardId, serial, dateCode, lastRecapOn: lastRecapOn || null },
+          { boardId, ...facts, lastRecapOn: facts.lastRecapOn || null },
           {
             onSuccess: onDone,
             onError: (err) => {
@@ -154,37 +150,7 @@ function FitBoardForm({ gameId, boards, onDone }: { gameId: string; boards: Fitt
           </select>
         )}
       </Field>
-      <Field label="Serial" error={errors.serial}>
-        {(p) => (
-          <input
-            {...p}
-            className={inputClass}
-            value={serial}
-            maxLength={60}
-            autoComplete="off"
-            onChange={(e) => setSerial(e.target.value)}
-          />
-        )}
-      </Field>
-      <Field
-        label="Date code as printed"
-        error={errors.dateCode}
-        hint="8934 (year and week), 1989-W34 or 1989-08. A code that reads two ways is saved and flagged for you to settle."
-      >
-        {(p) => (
-          <input
-            {...p}
-            className={inputClass}
-            value={dateCode}
-            maxLength={40}
-            autoComplete="off"
-            onChange={(e) => setDateCode(e.target.value)}
-          />
-        )}
-      </Field>
-      <Field label="Last recap (if any)" error={errors.lastRecapOn}>
-        {(p) => <input {...p} type="date" className={inputClass} value={lastRecapOn} onChange={(e) => setLastRecapOn(e.target.value)} />}
-      </Field>
+      <BoardFactsFields facts={facts} errors={errors} onChange={setFacts} />
       {formError && (
         <p role="alert" className="font-semibold text-down sm:col-span-2">
           {formError}

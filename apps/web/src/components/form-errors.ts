@@ -1,6 +1,7 @@
 // Puts the API's field errors (RFC 9457 `errors`) onto a react-hook-form form; returns what is left.
 import type { FieldValues, Path, UseFormSetError } from 'react-hook-form';
 import { ApiError } from '../lib/api-client.ts';
+import { asSentence } from '../lib/format.ts';
 
 export function applyServerErrors<T extends FieldValues>(
   err: unknown,
@@ -20,6 +21,5 @@ export function applyServerErrors<T extends FieldValues>(
 
 /** zod's messages read "must be …" after the field label. */
 export function fieldMessage(message: string | undefined): string | undefined {
-  if (!message) return undefined;
-  return message.charAt(0).toUpperCase() + message.slice(1);
+  return message ? asSentence(message) : undefined;
 }

@@ -1,7 +1,7 @@
 // A board's recap status: a word and an icon beside the colour, never colour alone.
 import { CalendarClock, CircleCheck, CircleHelp, CircleMinus, OctagonExclamationPoint } from 'lucide-react';
 import type { RecapEstimate, RecapStatus } from '@bumperline/contracts/boards';
-import { formatDate, type LocaleSettings } from '../lib/format.ts';
+import { asSentence, formatDate, type LocaleSettings } from '../lib/format.ts';
 
 export const recapStatusLabels: Record<RecapStatus, string> = {
   overdue: 'Recap overdue',
@@ -29,6 +29,18 @@ export function RecapStatusBadge({ status }: { status: RecapStatus }) {
   );
 }
 
+/**
+ * What to do about the board, in the company's date format: "Recap now: overdue since Dec 19, 1992 — C1 (85 °C,
+ * 1,000 h) sets the date"; for a date code to settle, how to settle it. Null when there is nothing to do yet.
+ */
+export function recapAdvice(recap: RecapEstimate, locale: LocaleSettings | undefined): string | null {
+  if (recap.status === 'overdue' && recap.dueDate) {
+    const limiting = recap.limitingDesignator ? ` — ${recap.limitingDesignator} (${recap.limitingRating}) sets the date` : '';
+    return `Recap now: overdue since ${formatDate(recap.dueDate, locale)}${limiting}`;
+  }
+  return recap.recommendation ? asSentence(recap.recommendation) : null;
+}
+
 /** One line on when the recap is due, in the company's date format. */
 export function recapLine(recap: RecapEstimate, locale: LocaleSettings | undefined): string {
   const due = formatDate(recap.dueDate, locale);
@@ -40,6 +52,6 @@ export function recapLine(recap: RecapEstimate, locale: LocaleSettings | undefin
     case 'ok':
       return `Due ${due}`;
     default:
-      return recap.message.charAt(0).toUpperCase() + recap.message.slice(1);
+      return asSentence(recap.message);
   }
 }

@@ -22,6 +22,9 @@ export function formatDateTime(iso: string | null | undefined, s: LocaleSettings
   return new Intl.DateTimeFormat(s.locale, { dateStyle: 'medium', timeStyle: 'short', timeZone: s.timeZone }).format(new Date(iso));
 }
 
+/** A message from the API or the domain ("must be …", "reads low …") as a sentence on its own. */
+export const asSentence = (text: string): string => text.charAt(0).toUpperCase() + text.slice(1);
+
 export function formatMoney(cents: number, s: LocaleSettings = defaultLocale): string {
   return new Intl.NumberFormat(s.locale, { style: 'currency', currency: s.currency }).format(cents / 100);
 }

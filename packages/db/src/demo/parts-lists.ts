@@ -4,20 +4,13 @@
 // are the generic ones such boards carried.
 import { eq } from 'drizzle-orm';
 import type { Tx } from '../client.ts';
+import type { BoardPartFields } from '../queries/board-parts.ts';
 import { boardParts, gameModels, modelBoards } from '../schema/index.ts';
 
 type Kind = (typeof boardParts.$inferInsert)['kind'];
 
-export interface DemoPart {
-  designator: string;
-  kind: Kind;
-  value: string;
-  tolerance: string;
-  rating: string;
-  ratedTemperatureC: number | null;
-  ratedLifeHours: number | null;
-  notes: string;
-}
+/** A line of a demo parts list: what a parts-list save stores. */
+export type DemoPart = BoardPartFields;
 
 export interface DemoBoard {
   modelTitle: string;

@@ -16,6 +16,7 @@ import {
   users,
 } from '../schema/index.ts';
 import { currentTenant } from '../schema/rls.ts';
+import { boardPartColumns } from './board-parts.ts';
 import { decodeCursor, keysetOrder, keysetWhere, toPage, type SortKey } from './keyset.ts';
 import { updateAtVersion } from './versioned-update.ts';
 
@@ -70,23 +71,26 @@ export async function getBenchJob(tx: Tx, id: string) {
   return row;
 }
 
-export type BenchJobSummaryRow = Pick<
-  BenchJobRow,
-  | 'id'
-  | 'boardInstanceId'
-  | 'boardName'
-  | 'boardSerial'
-  | 'gameId'
-  | 'gameLabel'
-  | 'serviceCallId'
-  | 'origin'
-  | 'state'
-  | 'templateName'
-  | 'openedBy'
-  | 'openedAt'
-  | 'finishedBy'
-  | 'finishedAt'
->;
+/** What a list shows of each job: the job's own columns without its steps, draft and parts. */
+const summaryKeys = [
+  'id',
+  'boardInstanceId',
+  'boardName',
+  'boardSerial',
+  'gameId',
+  'gameLabel',
+  'serviceCallId',
+  'origin',
+  'state',
+  'templateName',
+  'openedBy',
+  'openedAt',
+  'finishedBy',
+  'finishedAt',
+] as const satisfies readonly (keyof typeof jobColumns)[];
+const summaryColumns = Object.fromEntries(summaryKeys.map((k) => [k, jobColumns[k]]));
+
+export type BenchJobSummaryRow = Pick<BenchJobRow, (typeof summaryKeys)[number]> & { openedByUserId: string | null };
 
 export interface BenchJobListParams {
   state?: JobState;
@@ -117,20 +121,8 @@ export async function listBenchJobs(tx: Tx, p: BenchJobListParams) {
     .orderBy(...keysetOrder(openedAtKey, benchJobs.id, 'desc'))
     .limit(p.limit + 1);
   const rows = (await fromJobs(tx, {
-    id: benchJobs.id,
-    boardInstanceId: benchJobs.boardInstanceId,
-    boardName: modelBoards.name,
-    boardSerial: boardInstances.serial,
-    gameId: boardInstances.gameId,
-    gameLabel,
-    serviceCallId: benchJobs.serviceCallId,
-    origin: benchJobs.origin,
-    state: benchJobs.state,
-    templateName: benchJobs.templateName,
-    openedBy: openedBy.name,
-    openedAt: benchJobs.openedAt,
-    finishedBy: finishedBy.name,
-    finishedAt: benchJobs.finishedAt,
+    ...summaryColumns,
+    openedByUserId: benchJobs.openedBy,
     sortValue: sql<string>`${openedAtKey.expr}::text`,
   })
     .where(and(eq(benchJobs.tenantId, currentTenant), sql`${benchJobs.id} = any(array(${page}))`))
@@ -190,18 +182,7 @@ export async function markBenchJobFinished(tx: Tx, id: string, version: number, 
  */
 export async function listPartsForBenchJob(tx: Tx, boardId: string, jobId: string) {
   return tx
-    .select({
-      id: boardParts.id,
-      designator: boardParts.designator,
-      kind: boardParts.kind,
-      value: boardParts.value,
-      tolerance: boardParts.tolerance,
-      rating: boardParts.rating,
-      ratedTemperatureC: boardParts.ratedTemperatureC,
-      ratedLifeHours: boardParts.ratedLifeHours,
-      notes: boardParts.notes,
-      removed: sql<boolean>`${boardParts.removedAt} is not null`,
-    })
+    .select({ ...boardPartColumns, removed: sql<boolean>`${boardParts.removedAt} is not null` })
     .from(boardParts)
     .where(
       and(

@@ -2,7 +2,7 @@
 // electrolytics on their parts lists that set each board's recap date.
 import { and, asc, eq, inArray, isNull, sql } from 'drizzle-orm';
 import type { Tx } from '../client.ts';
-import { boardInstances, boardParts, gameModels, games, modelBoards, venues } from '../schema/index.ts';
+import { boardInstances, boardParts, cabinetProfiles, gameModels, games, modelBoards, venues, type CabinetSlice } from '../schema/index.ts';
 import { currentTenant } from '../schema/rls.ts';
 import { updateAtVersion } from './versioned-update.ts';
 
@@ -65,8 +65,10 @@ export async function updateBoardInstance(tx: Tx, id: string, version: number, p
 }
 
 /**
- * Every board of the company with its game and venue, for the recap list: one pass over the company's boards
- * (they are judged in the service, so every one is read; a few thousand rows).
+ * Every board of the company with its game, venue and the game's cabinet day (null without a profile), for the
+ * recap list: one pass over the company's boards (they are judged in the service, so every one is read; a few
+ * thousand rows). The venue's name and the cabinet day are sub-selects by key: joined, or read on their own, a large
+ * company's venues and profiles are a big enough share of all that the planner reads every company's rows.
  */
 export async function listFleetBoardInstances(tx: Tx) {
   return tx
@@ -79,18 +81,22 @@ export async function listFleetBoardInstances(tx: Tx) {
       gameId: boardInstances.gameId,
       gameSerial: games.serial,
       venueId: games.venueId,
-      venueName: venues.name,
+      venueName: sql<
+        string | null
+      >`(select ${venues.name} from ${venues} where ${venues.tenantId} = ${games.tenantId} and ${venues.id} = ${games.venueId})`,
       serial: boardInstances.serial,
       dateCode: boardInstances.dateCode,
       madeOn: boardInstances.madeOn,
       dateCodeFlag: boardInstances.dateCodeFlag,
       lastRecapOn: boardInstances.lastRecapOn,
+      cabinetSlices: sql<
+        CabinetSlice[] | null
+      >`(select ${cabinetProfiles.slices} from ${cabinetProfiles} where ${cabinetProfiles.tenantId} = ${boardInstances.tenantId} and ${cabinetProfiles.gameId} = ${boardInstances.gameId})`,
     })
     .from(boardInstances)
     .innerJoin(modelBoards, and(eq(modelBoards.tenantId, boardInstances.tenantId), eq(modelBoards.id, boardInstances.boardId)))
     .innerJoin(gameModels, and(eq(gameModels.tenantId, modelBoards.tenantId), eq(gameModels.id, modelBoards.modelId)))
     .leftJoin(games, and(eq(games.tenantId, boardInstances.tenantId), eq(games.id, boardInstances.gameId)))
-    .leftJoin(venues, and(eq(venues.tenantId, games.tenantId), eq(venues.id, games.venueId)))
     .where(eq(boardInstances.tenantId, currentTenant));
 }
 

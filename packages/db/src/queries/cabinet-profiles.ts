@@ -14,13 +14,13 @@ export async function getCabinetProfile(tx: Tx, gameId: string) {
   return row;
 }
 
-/** The profiles of these games that have one, or every profile of the company without `gameIds` (the fleet). */
-export async function listCabinetProfiles(tx: Tx, gameIds?: readonly string[]) {
-  if (gameIds?.length === 0) return [];
+/** The profiles of these games that have one (the recap list reads its games' with each board: board-instances.ts). */
+export async function listCabinetProfiles(tx: Tx, gameIds: readonly string[]) {
+  if (gameIds.length === 0) return [];
   return tx
     .select(profileColumns)
     .from(cabinetProfiles)
-    .where(and(eq(cabinetProfiles.tenantId, currentTenant), gameIds ? inArray(cabinetProfiles.gameId, [...new Set(gameIds)]) : undefined));
+    .where(and(eq(cabinetProfiles.tenantId, currentTenant), inArray(cabinetProfiles.gameId, [...new Set(gameIds)])));
 }
 
 /** Sets a game's profile, replacing the one it had. */

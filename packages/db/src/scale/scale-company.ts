@@ -1,11 +1,13 @@
 // One operator company of the scale data: its people, venues, models, games, and years of service calls
 // with their timelines, downtime, messages and audit rows, shaped like a real route (most faults fixed
-// within a day, some waiting on parts or in the shop, a few hundred calls open at the largest company).
+// within a day, some waiting on parts or in the shop, a few hundred calls open at the largest company), and its
+// bench (scale-bench.ts): boards and parts lists, the boards in the games, overhauls and bench jobs.
 import { randomBytes } from 'node:crypto';
 import { callStateGroups, defaultSeverity, type CallState, type ProblemKind, type Severity } from '@bumperline/contracts/calls';
 import { openingHoursFor, streets } from '../demo/scenario.ts';
 import { textArray } from './copy-table.ts';
 import type { Dice } from './dice.ts';
+import { CompanyBench } from './scale-bench.ts';
 import { companyName, metros, modelCatalogue, personName, skillsByKind, venueName, type ModelKind } from './scale-names.ts';
 import type { ScaleTables } from './scale-tables.ts';
 
@@ -34,6 +36,8 @@ export interface CompanyPlan {
 export interface CompanyContext {
   tables: ScaleTables;
   dice: Dice;
+  /** The bench's own draws (scale-bench.ts), so the rest of the data is the same with or without it. */
+  benchDice: Dice;
   now: number;
   passwordHash: string;
   /** Called after each game's calls, so held rows can be sent before they pile up. */
@@ -57,6 +61,7 @@ interface Model {
   id: string;
   title: string;
   kind: ModelKind;
+  year: number;
 }
 
 interface Step {
@@ -249,8 +254,14 @@ export async function generateCompany(plan: CompanyPlan, ctx: CompanyContext): P
       created_at: new Date(founded),
     });
     audit(ctx, tenantId, owner, founded, 'create', 'game_model', id, { maker: m.maker, title: m.title });
-    return { id, title: m.title, kind: m.kind };
+    return { id, title: m.title, kind: m.kind, year: m.year };
   });
+  const bench = new CompanyBench(
+    { tables: t, dice: ctx.benchDice, now: ctx.now },
+    { tenantId, start, technicians },
+    models,
+    plan.index === 0,
+  );
 
   const serialPrefix = String.fromCharCode(65 + (plan.index % 26), 65 + (Math.floor(plan.index / 26) % 26));
   for (let g = 0; g < plan.games; g++) {
@@ -311,9 +322,20 @@ export async function generateCompany(plan: CompanyPlan, ctx: CompanyContext): P
       writeCall(ctx, company, game, { opened: at, problem, severity, steps });
       at = steps[steps.length - 1]!.at + dice.exponential(meanGap);
     }
-    if (open) writeCall(ctx, company, game, { opened: open.opened, problem: openProblem, severity: openSeverity, steps: open.steps });
+    const openCallId = open
+      ? writeCall(ctx, company, game, { opened: open.opened, problem: openProblem, severity: openSeverity, steps: open.steps })
+      : undefined;
+    if (!retired) {
+      bench.fitGame({
+        id: gameId,
+        modelId: model.id,
+        installedAt,
+        openCall: openCallId && openState ? { id: openCallId, state: openState } : undefined,
+      });
+    }
     await ctx.afterGame();
   }
+  bench.finish();
   return tenantId;
 }
 
@@ -403,7 +425,7 @@ function writeCall(
   c: Company,
   game: { id: string; title: string; venue: Venue },
   call: { opened: number; problem: ProblemKind; severity: Severity; steps: Step[] },
-) {
+): string {
   const { tables: t, dice } = ctx;
   const id = dice.uuid();
   const steps = [...call.steps];
@@ -555,6 +577,7 @@ function writeCall(
       ended_at: dateOrNull(fixedAt ?? (state === 'cancelled' ? closedAt : null)),
     });
   }
+  return id;
 }
 
 function audit(

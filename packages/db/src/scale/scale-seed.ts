@@ -61,7 +61,8 @@ export async function seedScale(options: ScaleOptions & ScaleTarget): Promise<Sc
     const existing = await client.query<{ n: number }>('select count(*)::int as n from tenants');
     if (existing.rows[0]!.n > 0) throw new Error('seedScale loads into an empty database; this one already has companies');
 
-    const dice = new Dice(options.seed ?? 20261214);
+    const seed = options.seed ?? 20261214;
+    const dice = new Dice(seed);
     const plans = planCompanies(dice, options);
     const games = plans.reduce((sum, p) => sum + p.games, 0);
     const tables = scaleTables();
@@ -76,6 +77,7 @@ export async function seedScale(options: ScaleOptions & ScaleTarget): Promise<Sc
     const ctx = {
       tables,
       dice,
+      benchDice: new Dice(seed + 1),
       now: (options.now ?? new Date()).getTime(),
       passwordHash: await hashPassword(SCALE_PASSWORD),
       async afterGame() {

@@ -7,6 +7,7 @@ import {
   judgePower,
   judgeReading,
   partsForStep,
+  storedReadingText,
   type BenchJobDraftInput,
   type BenchPart,
   type BenchStepInput,
@@ -95,6 +96,15 @@ describe('judgeReading', () => {
     expect(message(judgeReading(c100u, '4k7Ω', false))).toMatch(/^Ω is not a capacitance/);
     expect(message(judgeReading(diode, '0.6', false))).toMatch(/D1 has no value .* diode test/);
     expect(message(judgeReading(r600, '  ', false))).toMatch(/type a reading/);
+  });
+});
+
+describe('storedReadingText', () => {
+  it('shows a stored value with its unit, as the live verdict did, and anything else as typed', () => {
+    expect(storedReadingText({ measured: 672, unit: 'Ω', measuredText: '672' })).toBe('672 Ω');
+    expect(storedReadingText({ measured: 4630, unit: 'Ω', measuredText: '4k63' })).toBe('4.63 kΩ');
+    expect(storedReadingText({ measured: null, unit: null, measuredText: 'forward 0.55 / reverse OL' })).toBe('forward 0.55 / reverse OL');
+    expect(storedReadingText({ measured: 0.55, unit: 'volts', measuredText: '0.55' })).toBe('0.55');
   });
 });
 

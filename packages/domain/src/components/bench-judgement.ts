@@ -4,7 +4,7 @@ import { checkFuseReplacement, parseFuseMarking, type FuseRating } from './fuses
 import type { PartKindName, PartSpec } from './parts-list-entry.ts';
 import { checkResistorPower } from './power.ts';
 import { checkReading, type ReadingResult } from './readings.ts';
-import { formatQuantity, parseQuantity, type Unit } from './values.ts';
+import { formatQuantity, parseQuantity, UNITS, type Unit } from './values.ts';
 
 /**
  * What the bench records, judged against the parts list: a value reading against its tolerance window, a diode or
@@ -56,6 +56,16 @@ export function formatWindow(min: number, max: number, unit: Unit): string {
   return `${formatQuantity(min, unit, { significantDigits: 4 })} – ${formatQuantity(max, unit, { significantDigits: 4 })}`;
 }
 
+/** A measured value as the live verdict showed it ("672 Ω", "98.2 µF"): six significant figures, so nothing typed is lost. */
+export function formatMeasured(measured: number, unit: Unit): string {
+  return formatQuantity(measured, unit, { significantDigits: 6 });
+}
+
+/** A stored reading with its unit, or as it was typed when it has no value in a known unit (a diode set's "OL"). */
+export function storedReadingText(r: { measured: number | null; unit: string | null; measuredText: string }): string {
+  return r.measured !== null && UNITS.includes(r.unit as Unit) ? formatMeasured(r.measured, r.unit as Unit) : r.measuredText;
+}
+
 function writtenUnit(text: string): string | null {
   return /([A-Za-zµμΩΩ]+)\s*$/.exec(text.trim())?.[1] ?? null;
 }
@@ -92,7 +102,7 @@ export function judgeReading(spec: PartSpec, text: string, inCircuit: boolean): 
       ...result,
       measured,
       unit,
-      measuredText: formatQuantity(measured, unit, { significantDigits: 6 }),
+      measuredText: formatMeasured(measured, unit),
       windowText: formatWindow(result.min, result.max, unit),
       deviationText: formatDeviation(result.deviationPercent),
       note: noteInTradeNotation(result, unit),

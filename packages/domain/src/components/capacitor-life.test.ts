@@ -1,6 +1,14 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { calendarLife, estimateLifeHours, profileLife, recapDue, recapDueWithProfile } from './capacitor-life.ts';
+import {
+  calendarLife,
+  estimateLifeHours,
+  profileLife,
+  profileLives,
+  recapDue,
+  recapDueFromLives,
+  recapDueWithProfile,
+} from './capacitor-life.ts';
 
 const part = { ratedLifeHours: 2000, ratedTemperatureC: 105 };
 
@@ -288,6 +296,56 @@ describe('recapDueWithProfile', () => {
     ).toThrow(expect.objectContaining({ code: 'above-rated-temperature', message: expect.stringMatching(/^capacitor 2: slice 2/) }));
     expect(() => recapDueWithProfile({ from: '2030-01-01', capacitors: [part], slices, asOf: '2020-01-01' })).toThrow(
       expect.objectContaining({ field: 'from' }),
+    );
+  });
+});
+
+describe('profileLives and recapDueFromLives (recapDueWithProfile in two steps, for a list of many boards)', () => {
+  const slices = [
+    { hours: 4, temperatureC: 45 },
+    { hours: 6, temperatureC: 55 },
+  ];
+
+  it('give recapDueWithProfile’s answer (or its refusal: a slice hotter than an 85 °C part) for any start, parts and day', () => {
+    const capacitor = fc.record({
+      ratedLifeHours: fc.integer({ min: 500, max: 20_000 }),
+      ratedTemperatureC: fc.constantFrom(85, 105, 125),
+    });
+    const day = fc.array(fc.record({ hours: fc.integer({ min: 0, max: 6 }), temperatureC: fc.integer({ min: 20, max: 95 }) }), {
+      minLength: 1,
+      maxLength: 4,
+    });
+    const start = fc
+      .integer({ min: 0, max: 12_000 })
+      .map((d) => new Date(Date.UTC(1990, 0, 1) + d * 86_400_000).toISOString().slice(0, 10));
+    fc.assert(
+      fc.property(fc.array(capacitor, { minLength: 1, maxLength: 5 }), day, start, (capacitors, day, from) => {
+        const asOf = '2024-06-01';
+        let whole: unknown;
+        try {
+          whole = recapDueWithProfile({ from, capacitors, slices: day, asOf });
+        } catch (error) {
+          whole = error;
+        }
+        let split: unknown;
+        try {
+          split = recapDueFromLives({ from, lives: profileLives({ capacitors, slices: day }), asOf });
+        } catch (error) {
+          split = error;
+        }
+        expect(split).toEqual(whole);
+      }),
+    );
+  });
+
+  it('name the capacitor a too-hot slice rules out, and refuse a start after today or no parts', () => {
+    expect(() => profileLives({ capacitors: [part, { ratedLifeHours: 1000, ratedTemperatureC: 50 }], slices })).toThrow(
+      expect.objectContaining({ code: 'above-rated-temperature', message: expect.stringMatching(/^capacitor 2: slice 2/) }),
+    );
+    const lives = profileLives({ capacitors: [part], slices });
+    expect(() => recapDueFromLives({ from: '2030-01-01', lives, asOf: '2020-01-01' })).toThrow(expect.objectContaining({ field: 'from' }));
+    expect(() => recapDueFromLives({ from: '2010-01-01', lives: [], asOf: '2020-01-01' })).toThrow(
+      expect.objectContaining({ code: 'missing-input' }),
     );
   });
 });

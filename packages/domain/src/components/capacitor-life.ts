@@ -258,18 +258,24 @@ export interface ProfileRecapInput {
   maxYears?: number;
 }
 
-/** recapDue with the cabinet's temperature profile instead of one temperature (see profileLife). */
-export function recapDueWithProfile(input: ProfileRecapInput): RecapDue {
-  parsePlainDate(input?.asOf, 'asOf');
-  let from: string;
+/** A profile recap's start: a date or a date code, not after `asOf`. */
+function profileStart(fromText: string, asOf: string): string {
   try {
-    from = parseManufactureDate(input.from, input.asOf).date;
+    return parseManufactureDate(fromText, asOf).date;
   } catch (error) {
     if (error instanceof DomainError && error.field === 'dateCode') throw new DomainError(error.code, error.message, 'from');
     throw error;
   }
-  requireCapacitors(input.capacitors);
-  const lives = input.capacitors.map((cap, i) => {
+}
+
+/**
+ * Each capacitor's life under the cabinet's profile (profileLife), a too-hot slice named by the capacitor it rules
+ * out. It depends on the parts and the cabinet only, so a list of many boards of one design in cabinets alike works
+ * it out once per design and cabinet day, then dates each board with recapDueFromLives.
+ */
+export function profileLives(input: Pick<ProfileRecapInput, 'capacitors' | 'slices' | 'maxYears'>): ProfileLife[] {
+  requireCapacitors(input?.capacitors);
+  return input.capacitors.map((cap, i) => {
     try {
       return profileLife({ ...cap, slices: input.slices, ...(input.maxYears === undefined ? {} : { maxYears: input.maxYears }) });
     } catch (error) {
@@ -283,5 +289,19 @@ export function recapDueWithProfile(input: ProfileRecapInput): RecapDue {
       throw error;
     }
   });
-  return dueFromLives(from, lives, input.asOf, input.leadMonths);
+}
+
+/** recapDueWithProfile from the lives profileLives gave: the due date and advice counted from `from`. */
+export function recapDueFromLives(input: { from: string; lives: readonly ProfileLife[]; asOf: string; leadMonths?: number }): RecapDue {
+  parsePlainDate(input?.asOf, 'asOf');
+  const from = profileStart(input.from, input.asOf);
+  requireCapacitors(input.lives);
+  return dueFromLives(from, input.lives, input.asOf, input.leadMonths);
+}
+
+/** recapDue with the cabinet's temperature profile instead of one temperature (see profileLife). */
+export function recapDueWithProfile(input: ProfileRecapInput): RecapDue {
+  parsePlainDate(input?.asOf, 'asOf');
+  const from = profileStart(input.from, input.asOf);
+  return dueFromLives(from, profileLives(input), input.asOf, input.leadMonths);
 }

@@ -5,7 +5,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { Link, useParams, useSearchParams } from 'react-router-dom';
 import { ChevronLeft, ChevronRight, FileText, Flag, ListOrdered } from 'lucide-react';
 import type { BenchJob } from '@bumperline/contracts/bench-jobs';
-import type { BenchJobDraft, BenchStep } from '@bumperline/contracts/bench-vocabulary';
+import { stepRecordLabels, type BenchJobDraft, type BenchStep } from '@bumperline/contracts/bench-vocabulary';
 import { partsForStep } from '@bumperline/domain/components/bench-judgement';
 import { PageHeader } from '../../components/page-header.tsx';
 import { ErrorState, Loading } from '../../components/states.tsx';
@@ -30,7 +30,7 @@ import { PowerRecord } from './record-power.tsx';
 import { PartsUsedRecord } from './record-parts-used.tsx';
 import { CheckRecord, NoteRecord } from './record-check.tsx';
 import { StepPhotos } from './step-photos.tsx';
-import { recordHints, recordLabels } from './words.ts';
+import { recordHints } from './words.ts';
 import type { RecordProps } from './record-props.ts';
 
 export function BenchJobPage() {
@@ -134,26 +134,31 @@ function JobScreen({ job }: { job: BenchJob }) {
       <PageHeader
         title={`Bench job · ${job.boardName}`}
         subtitle={
+          // Each separator stays at the end of the item before it, so a wrapped line never starts with one.
           <span className="inline-flex flex-wrap items-center gap-x-2">
-            {job.gameId && job.gameLabel ? (
-              <Link className="link" to={paths.game(job.gameId)}>
-                {job.gameLabel}
-              </Link>
-            ) : null}
-            <span aria-hidden>·</span>
-            <Link className="link" to={paths.boardInstance(job.boardInstanceId)}>
-              {job.boardSerial ? `Board ${job.boardSerial}` : 'The board'}
-            </Link>
-            <span aria-hidden>·</span>
-            <span>{job.templateName}</span>
-            {job.serviceCallId && (
-              <>
-                <span aria-hidden>·</span>
-                <Link className="link" to={paths.call(job.serviceCallId)}>
+            {[
+              job.gameId && job.gameLabel ? (
+                <Link key="game" className="link" to={paths.game(job.gameId)}>
+                  {job.gameLabel}
+                </Link>
+              ) : null,
+              <Link key="board" className="link" to={paths.boardInstance(job.boardInstanceId)}>
+                {job.boardSerial ? `Board ${job.boardSerial}` : 'The board'}
+              </Link>,
+              <span key="template">{job.templateName}</span>,
+              job.serviceCallId ? (
+                <Link key="call" className="link" to={paths.call(job.serviceCallId)}>
                   The service call
                 </Link>
-              </>
-            )}
+              ) : null,
+            ]
+              .filter((item) => item !== null)
+              .map((item, i, items) => (
+                <span key={item.key}>
+                  {item}
+                  {i < items.length - 1 && <span aria-hidden> ·</span>}
+                </span>
+              ))}
           </span>
         }
         actions={
@@ -336,7 +341,7 @@ function StepCard({
     <section className="card grid gap-4" aria-labelledby="step-title">
       <header className="grid gap-1">
         <p className="text-sm font-bold tracking-wide text-ink-muted uppercase">
-          Step {index + 1} of {job.steps.length} · {recordLabels[step.record]}
+          Step {index + 1} of {job.steps.length} · {stepRecordLabels[step.record]}
         </p>
         <h2 id="step-title" className="text-xl font-extrabold">
           {step.title}

@@ -10,6 +10,7 @@ import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings, useMe } from '../../api/me.ts';
 import { formatDateTime } from '../../lib/format.ts';
 import { paths } from '../../lib/paths.ts';
+import { finishedJobsQuery, openJobsQuery } from './bench-queries.ts';
 
 export function BenchPage() {
   return (
@@ -44,7 +45,7 @@ function JobItem({ job, mine }: { job: BenchJobSummary; mine: boolean }) {
       <p className="text-sm text-ink-muted">
         {finished
           ? `Finished${job.finishedBy ? ` by ${job.finishedBy}` : ''} ${formatDateTime(job.finishedAt, locale)}`
-          : `Opened${job.openedBy ? ` by ${job.openedBy}` : ''} ${formatDateTime(job.openedAt, locale)}`}
+          : `Opened${mine ? ' by you' : job.openedBy ? ` by ${job.openedBy}` : ''} ${formatDateTime(job.openedAt, locale)}`}
       </p>
       {finished && (
         <p className="text-sm">
@@ -59,10 +60,11 @@ function JobItem({ job, mine }: { job: BenchJobSummary; mine: boolean }) {
 
 function OpenJobs() {
   const me = useMe();
-  const jobs = useBenchJobs({ state: 'in_progress', limit: 100 });
-  const myName = me.data?.user.name;
-  // The list names who opened each job: the technician's own come first.
-  const items = [...(jobs.data?.items ?? [])].sort((a, b) => Number(b.openedBy === myName) - Number(a.openedBy === myName));
+  const jobs = useBenchJobs(openJobsQuery);
+  const myId = me.data?.user.id;
+  const isMine = (job: BenchJobSummary) => !!myId && job.openedByUserId === myId;
+  // The technician's own jobs come first (a stable sort keeps the newest first within each group).
+  const items = [...(jobs.data?.items ?? [])].sort((a, b) => Number(isMine(b)) - Number(isMine(a)));
   return (
     <section className="card grid gap-3" aria-labelledby="open-jobs">
       <h2 id="open-jobs" className="flex items-center gap-2 text-lg font-bold">
@@ -79,7 +81,7 @@ function OpenJobs() {
       ) : (
         <ul className="grid gap-2">
           {items.map((job) => (
-            <JobItem key={job.id} job={job} mine={!!myName && job.openedBy === myName} />
+            <JobItem key={job.id} job={job} mine={isMine(job)} />
           ))}
         </ul>
       )}
@@ -88,7 +90,7 @@ function OpenJobs() {
 }
 
 function FinishedJobs() {
-  const jobs = useBenchJobs({ state: 'finished', limit: 10 });
+  const jobs = useBenchJobs(finishedJobsQuery);
   return (
     <section className="card grid gap-3" aria-labelledby="finished-jobs">
       <h2 id="finished-jobs" className="text-lg font-bold">

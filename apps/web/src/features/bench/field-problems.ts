@@ -1,6 +1,7 @@
 // Where the server's field problems go on the job screen. Finish answers 400 with fields such as
 // `steps.measure.readings.<partId>`, `steps.fuses.fuses.<partId>`, `steps.<key>.acknowledged` or
 // `partsUsed.2.quantity`; each is shown beside its input, and the screen scrolls to the first.
+import { asSentence } from '../../lib/format.ts';
 
 export interface FieldProblem {
   field: string;
@@ -44,7 +45,7 @@ export function placeProblems(problems: readonly FieldProblem[], stepKeys: reado
       return;
     }
     // Several messages for one field read as one; each starts as a sentence.
-    const sentence = problem.message.charAt(0).toUpperCase() + problem.message.slice(1);
+    const sentence = asSentence(problem.message);
     byField[problem.field] = byField[problem.field] ? `${byField[problem.field]} ${sentence}` : sentence;
     // Steps in order, then parts used; within a step, in the server's order.
     placed.push({ problem, order: (stepIndex >= 0 ? stepIndex : stepKeys.length) * 10_000 + index });

@@ -6,6 +6,7 @@ import { Link, useParams } from 'react-router-dom';
 import { ArrowLeft, FileDown, Printer } from 'lucide-react';
 import type { BenchJob } from '@bumperline/contracts/bench-jobs';
 import { cautions } from '@bumperline/contracts/bench-cautions';
+import { stepRecordLabels } from '@bumperline/contracts/bench-vocabulary';
 import { ErrorState, Loading } from '../../components/states.tsx';
 import { useBenchJob } from '../../api/bench-jobs.ts';
 import { useLocaleSettings } from '../../api/me.ts';
@@ -15,8 +16,7 @@ import { readJobParts } from './job-parts.ts';
 import { stepProgress } from './draft.ts';
 import { describeOutOfTolerance, fromDraft, fromEvaluation, inPartsListOrder, outOfTolerance, type SheetReading } from './sheet-results.ts';
 import { watts } from './record-power.tsx';
-import { VerdictBadge } from './verdict-badge.tsx';
-import { recordLabels } from './words.ts';
+import { VerdictBadge, verdictOfReading } from '../../components/verdict-badge.tsx';
 
 export function JobSheetPage() {
   const { id = '' } = useParams();
@@ -29,7 +29,7 @@ export function JobSheetPage() {
 const cell = 'border border-paper-line px-2 py-1.5 text-left align-top print:border-black';
 
 function readingVerdict(r: SheetReading) {
-  return <VerdictBadge verdict={r.indicative ? 'indicative' : r.verdict} />;
+  return <VerdictBadge verdict={verdictOfReading(r)} />;
 }
 
 function Sheet({ job }: { job: BenchJob }) {
@@ -62,7 +62,12 @@ function Sheet({ job }: { job: BenchJob }) {
         <p className="text-sm font-bold tracking-wide text-ink-muted uppercase print:text-black">Bench job sheet</p>
         <h1 className="text-2xl font-extrabold">
           {job.boardName}
-          {job.boardSerial && <span className="whitespace-nowrap"> · serial {job.boardSerial}</span>}
+          {job.boardSerial && (
+            <>
+              {' '}
+              <span className="whitespace-nowrap">· serial {job.boardSerial}</span>
+            </>
+          )}
         </h1>
         <p>
           {job.gameLabel ?? 'Not in a game'} · {job.templateName}
@@ -122,7 +127,7 @@ function Sheet({ job }: { job: BenchJob }) {
                 </span>
                 <span className="text-base">{p.done ? '☑ Done' : '☐ Not done'}</span>
               </h2>
-              <p className="text-sm text-ink-soft print:text-black">Records: {recordLabels[step.record]}</p>
+              <p className="text-sm text-ink-soft print:text-black">Records: {stepRecordLabels[step.record]}</p>
               {step.cautions.length > 0 && (
                 <p className="text-sm">
                   <span className="font-semibold">Cautions:</span> {step.cautions.map((c) => cautions[c].title).join(', ')} —{' '}

@@ -12,6 +12,7 @@ import { useLocaleSettings } from '../../api/me.ts';
 import { ApiError } from '../../lib/api-client.ts';
 import { formatDateTime } from '../../lib/format.ts';
 import { paths } from '../../lib/paths.ts';
+import { openJobsOnBoardQuery } from './bench-queries.ts';
 
 export function NewBenchJobPage() {
   const { boardInstanceId = '' } = useParams();
@@ -21,7 +22,7 @@ export function NewBenchJobPage() {
   const locale = useLocaleSettings();
   const board = useBoardPage(boardInstanceId);
   const templates = useBenchTemplates();
-  const openJobs = useBenchJobs({ state: 'in_progress', boardInstanceId, limit: 10 });
+  const openJobs = useBenchJobs(openJobsOnBoardQuery(boardInstanceId));
   const openJob = useOpenBenchJob();
   const [templateId, setTemplateId] = useState<string | null>(null);
   const [problem, setProblem] = useState<string | null>(null);

@@ -2,12 +2,11 @@
 // the cross-checks), judged as a set by the domain as they are typed.
 import { memo } from 'react';
 import { BRIDGE_READING_KEYS, DIODE_READING_KEYS, judgeDiodeSet } from '@bumperline/domain/components/bench-judgement';
-import type { RecordProps } from './record-props.ts';
-import type { JobPart } from './job-parts.ts';
+import type { PartRowProps, RecordProps } from './record-props.ts';
 import { writtenValue } from './job-parts.ts';
 import { setDiodeReading } from './draft.ts';
 import { fieldDomId, problemAt } from './field-problems.ts';
-import { VerdictBadge } from './verdict-badge.tsx';
+import { VerdictBadge } from '../../components/verdict-badge.tsx';
 import { ValueInput } from './value-input.tsx';
 
 export function DiodesRecord({ step, progress, parts, readOnly, problems, edit }: RecordProps) {
@@ -41,14 +40,8 @@ const DiodeSet = memo(function DiodeSet({
   readOnly,
   stepKey,
   edit,
-}: {
-  part: JobPart;
-  field: string;
+}: PartRowProps & {
   readings: Record<string, string> | undefined;
-  problem: string | undefined;
-  readOnly: boolean;
-  stepKey: string;
-  edit: RecordProps['edit'];
 }) {
   const id = fieldDomId(field);
   const keys =
@@ -61,7 +54,7 @@ const DiodeSet = memo(function DiodeSet({
   const result = judged?.ok ? judged.value : null;
   const message = part.lineProblem ?? (judged && !judged.ok ? judged.message : undefined) ?? (result?.verdict ? undefined : problem);
   return (
-    <li className="grid gap-2 rounded-md border border-paper-line p-3">
+    <li className="grid content-start gap-2 rounded-md border border-paper-line p-3">
       <fieldset className="grid gap-2" aria-describedby={`${id}-result`}>
         <legend className="flex w-full flex-wrap items-baseline justify-between gap-x-3">
           <span className="text-lg font-extrabold">{part.line.designator}</span>

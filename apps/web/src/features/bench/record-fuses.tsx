@@ -2,11 +2,10 @@
 // only when current, voltage and speed match (the domain says why not, e.g. a quick-acting fuse in a time-lag circuit).
 import { memo } from 'react';
 import { judgeFuse } from '@bumperline/domain/components/bench-judgement';
-import type { RecordProps } from './record-props.ts';
-import type { JobPart } from './job-parts.ts';
+import type { PartRowProps, RecordProps } from './record-props.ts';
 import { setFitted } from './draft.ts';
 import { fieldDomId } from './field-problems.ts';
-import { VerdictBadge } from './verdict-badge.tsx';
+import { VerdictBadge } from '../../components/verdict-badge.tsx';
 import { inputClass } from '../../components/field.tsx';
 
 export function FusesRecord({ step, progress, parts, readOnly, problems, edit }: RecordProps) {
@@ -40,21 +39,15 @@ const FuseRow = memo(function FuseRow({
   readOnly,
   stepKey,
   edit,
-}: {
-  part: JobPart;
-  field: string;
+}: PartRowProps & {
   fitted: string;
-  problem: string | undefined;
-  readOnly: boolean;
-  stepKey: string;
-  edit: RecordProps['edit'];
 }) {
   const id = fieldDomId(field);
   const judged = fitted.trim() === '' || part.lineProblem ? null : judgeFuse(part, fitted);
   const result = judged?.ok ? judged.value : null;
   const message = part.lineProblem ?? (judged && !judged.ok ? judged.message : undefined) ?? (result?.accepted ? undefined : problem);
   return (
-    <li className="grid gap-2 rounded-md border border-paper-line p-3">
+    <li className="grid content-start gap-2 rounded-md border border-paper-line p-3">
       <div className="flex flex-wrap items-baseline justify-between gap-x-3">
         <span className="text-lg font-extrabold">{part.line.designator}</span>
         <span>

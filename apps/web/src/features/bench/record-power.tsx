@@ -3,12 +3,11 @@
 import { memo } from 'react';
 import { judgePower } from '@bumperline/domain/components/bench-judgement';
 import { formatQuantity } from '@bumperline/domain/components/values';
-import type { RecordProps } from './record-props.ts';
-import type { JobPart } from './job-parts.ts';
+import type { PartRowProps, RecordProps } from './record-props.ts';
 import { writtenValue } from './job-parts.ts';
 import { setVolts } from './draft.ts';
 import { fieldDomId } from './field-problems.ts';
-import { VerdictBadge } from './verdict-badge.tsx';
+import { VerdictBadge } from '../../components/verdict-badge.tsx';
 import { ValueInput } from './value-input.tsx';
 
 export const watts = (w: number) => formatQuantity(w, 'W', { significantDigits: 3 });
@@ -44,21 +43,15 @@ const PowerRow = memo(function PowerRow({
   readOnly,
   stepKey,
   edit,
-}: {
-  part: JobPart;
-  field: string;
+}: PartRowProps & {
   volts: string;
-  problem: string | undefined;
-  readOnly: boolean;
-  stepKey: string;
-  edit: RecordProps['edit'];
 }) {
   const id = fieldDomId(field);
   const judged = volts.trim() === '' || part.lineProblem ? null : judgePower(part, volts);
   const result = judged?.ok ? judged.value : null;
   const message = part.lineProblem ?? (judged && !judged.ok ? judged.message : undefined) ?? (result ? undefined : problem);
   return (
-    <li className="grid gap-2 rounded-md border border-paper-line p-3">
+    <li className="grid content-start gap-2 rounded-md border border-paper-line p-3">
       <div className="flex flex-wrap items-baseline justify-between gap-x-3">
         <label htmlFor={id} className="text-lg font-extrabold">
           {part.line.designator}
@@ -90,7 +83,8 @@ const PowerRow = memo(function PowerRow({
               <span>rated {watts(result.ratingWatts)}</span>
               <span>allowed {watts(result.allowedWatts)} after derating</span>
             </div>
-            <p className={result.undersized ? 'font-semibold text-down' : 'text-ink-soft'}>{result.message}</p>
+            {/* The numbers above say it all for a part within its rating; an undersized one is told why in words. */}
+            {result.undersized && <p className="font-semibold text-down">{result.message}</p>}
           </>
         ) : (
           <span className="text-sm text-ink-muted">Not measured yet.</span>

@@ -13,3 +13,14 @@ export interface RecordProps {
   /** Applies a change to the draft (the autosave sends it after a pause). */
   edit: (change: (draft: BenchJobDraft) => BenchJobDraft) => void;
 }
+
+/** What each part's row on a step gets: the part, its field name (problems and focus go by it), and how to edit. */
+export interface PartRowProps {
+  part: JobPart;
+  field: string;
+  /** The server's problem with this field, if any. */
+  problem: string | undefined;
+  readOnly: boolean;
+  stepKey: string;
+  edit: RecordProps['edit'];
+}

@@ -2,12 +2,11 @@
 // HIGH in words with its shape, the window and the deviation; bad text keeps the text and says why.
 import { memo } from 'react';
 import { judgeReading } from '@bumperline/domain/components/bench-judgement';
-import type { RecordProps } from './record-props.ts';
-import type { JobPart } from './job-parts.ts';
+import type { PartRowProps, RecordProps } from './record-props.ts';
 import { writtenValue } from './job-parts.ts';
 import { setReading } from './draft.ts';
 import { fieldDomId } from './field-problems.ts';
-import { VerdictBadge } from './verdict-badge.tsx';
+import { VerdictBadge, verdictOfReading } from '../../components/verdict-badge.tsx';
 import { ValueInput, lettersFor } from './value-input.tsx';
 
 export function ReadingsRecord({ step, progress, parts, readOnly, problems, edit }: RecordProps) {
@@ -44,15 +43,9 @@ const ReadingRow = memo(function ReadingRow({
   readOnly,
   stepKey,
   edit,
-}: {
-  part: JobPart;
-  field: string;
+}: PartRowProps & {
   text: string;
   inCircuit: boolean;
-  problem: string | undefined;
-  readOnly: boolean;
-  stepKey: string;
-  edit: RecordProps['edit'];
 }) {
   const id = fieldDomId(field);
   const onChange = (value: Partial<{ text: string; inCircuit: boolean }>) => edit((d) => setReading(d, stepKey, part.id, value));
@@ -61,7 +54,7 @@ const ReadingRow = memo(function ReadingRow({
   // The server judges with the same code: once the live verdict reads, its earlier problem is answered.
   const message = part.lineProblem ?? (judged && !judged.ok ? judged.message : undefined) ?? (result ? undefined : problem);
   return (
-    <li className="grid gap-2 rounded-md border border-paper-line p-3">
+    <li className="grid content-start gap-2 rounded-md border border-paper-line p-3">
       <div className="flex flex-wrap items-baseline justify-between gap-x-3">
         <label htmlFor={id} className="text-lg font-extrabold">
           {part.line.designator}
@@ -103,7 +96,7 @@ const ReadingRow = memo(function ReadingRow({
           <p className="font-semibold text-down">{message}</p>
         ) : result ? (
           <>
-            <VerdictBadge verdict={result.indicative ? 'indicative' : result.verdict} />
+            <VerdictBadge verdict={verdictOfReading(result)} />
             <span className="tabular">
               <span className="sr-only">Window </span>
               {result.windowText}

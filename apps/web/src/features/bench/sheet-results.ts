@@ -1,8 +1,7 @@
 // What a job sheet lists, from either source: a finished job's evaluation as the server stored it, or (for a job
 // still open) the same judgement worked out here by the domain from the draft.
 import type { BenchJob, BenchJobEvaluation } from '@bumperline/contracts/bench-jobs';
-import { evaluateBenchJob, formatDeviation } from '@bumperline/domain/components/bench-judgement';
-import { formatQuantity, UNITS, type Unit } from '@bumperline/domain/components/values';
+import { evaluateBenchJob, formatDeviation, storedReadingText } from '@bumperline/domain/components/bench-judgement';
 import type { JobPart } from './job-parts.ts';
 
 export interface SheetReading {
@@ -55,10 +54,7 @@ export function fromEvaluation(e: BenchJobEvaluation): SheetResults {
       partId: r.partId,
       designator: r.designator,
       // The server keeps the reading as typed ("672"); the sheet shows it with its unit, as the job screen did.
-      measuredText:
-        r.measured !== null && UNITS.includes(r.unit as Unit)
-          ? formatQuantity(r.measured, r.unit as Unit, { significantDigits: 6 })
-          : r.measuredText,
+      measuredText: storedReadingText(r),
       windowText: r.windowText,
       deviationText: r.deviationPercent === null ? null : formatDeviation(r.deviationPercent),
       verdict: r.verdict,

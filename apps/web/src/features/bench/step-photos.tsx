@@ -52,16 +52,13 @@ export function StepPhotos({
       )}
       {!readOnly && (
         <div>
-          <label htmlFor={id} className={`${main ? 'btn-primary' : 'btn-secondary'} cursor-pointer`}>
-            {upload.isPending ? <Loader2 aria-hidden className="size-4 animate-spin" /> : <Camera aria-hidden className="size-4" />}
-            {upload.isPending ? 'Uploading…' : main ? 'Take or upload a photo' : 'Add a photo'}
-          </label>
+          {/* The file input is hidden behind the button-like label, which shows the keyboard focus for it. */}
           <input
             id={id}
             type="file"
             accept="image/*"
             capture="environment"
-            className="sr-only"
+            className="peer sr-only"
             disabled={upload.isPending}
             aria-describedby={shown ? `${id}-problem` : undefined}
             onChange={(e) => {
@@ -82,6 +79,13 @@ export function StepPhotos({
               );
             }}
           />
+          <label
+            htmlFor={id}
+            className={`${main ? 'btn-primary' : 'btn-secondary'} cursor-pointer peer-focus-visible:outline-3 peer-focus-visible:outline-offset-2 peer-focus-visible:outline-brass-bright`}
+          >
+            {upload.isPending ? <Loader2 aria-hidden className="size-4 animate-spin" /> : <Camera aria-hidden className="size-4" />}
+            {upload.isPending ? 'Uploading…' : main ? 'Take or upload a photo' : 'Add a photo'}
+          </label>
           {shown && (
             <p id={`${id}-problem`} role="alert" className="mt-1 text-sm font-semibold text-down">
               {shown}

@@ -5,7 +5,7 @@ import { useState } from 'react';
 import { Link, useNavigate, useParams } from 'react-router-dom';
 import { ArrowDown, ArrowUp, Plus, Save, Trash2 } from 'lucide-react';
 import type { BenchTemplate } from '@bumperline/contracts/bench-jobs';
-import { cautionKinds, partKinds, partKindLabels, stepRecordKinds } from '@bumperline/contracts/bench-vocabulary';
+import { cautionKinds, partKinds, partKindLabels, stepRecordKinds, stepRecordLabels } from '@bumperline/contracts/bench-vocabulary';
 import { cautions } from '@bumperline/contracts/bench-cautions';
 import { PageHeader } from '../../components/page-header.tsx';
 import { ErrorState, Loading } from '../../components/states.tsx';
@@ -15,7 +15,6 @@ import { useBenchTemplate, useSaveBenchTemplate } from '../../api/bench-template
 import { ApiError } from '../../lib/api-client.ts';
 import { paths } from '../../lib/paths.ts';
 import { changeStep, moveStep, newStep, toEditable, toSteps, type EditableStep } from './template-draft.ts';
-import { recordLabels } from './words.ts';
 
 export function EditBenchTemplatePage() {
   const { id = '' } = useParams();
@@ -239,7 +238,7 @@ function StepEditor({
           >
             {stepRecordKinds.map((k) => (
               <option key={k} value={k}>
-                {recordLabels[k]}
+                {stepRecordLabels[k]}
               </option>
             ))}
           </select>

@@ -3,14 +3,13 @@
 import { Link, useParams } from 'react-router-dom';
 import { FileText, Pencil } from 'lucide-react';
 import type { BenchStep } from '@bumperline/contracts/bench-vocabulary';
-import { partKindLabels } from '@bumperline/contracts/bench-vocabulary';
+import { partKindLabels, stepRecordLabels } from '@bumperline/contracts/bench-vocabulary';
 import { PageHeader } from '../../components/page-header.tsx';
 import { ErrorState, Loading } from '../../components/states.tsx';
 import { useBenchTemplate } from '../../api/bench-templates.ts';
 import { useCan } from '../../api/use-can.ts';
 import { paths } from '../../lib/paths.ts';
 import { CautionList } from './caution-list.tsx';
-import { recordLabels } from './words.ts';
 
 export function BenchTemplatePage() {
   const { id = '' } = useParams();
@@ -50,7 +49,7 @@ export function BenchTemplatePage() {
             <h2 className="text-lg font-bold">
               <span className="text-ink-muted tabular">{i + 1}.</span> {step.title}
             </h2>
-            <p className="text-sm font-semibold text-ink-soft">Records: {recordLabels[step.record]}</p>
+            <p className="text-sm font-semibold text-ink-soft">Records: {stepRecordLabels[step.record]}</p>
             {step.instructions && <p className="whitespace-pre-line">{step.instructions}</p>}
             <PartsConcerned step={step} />
             <CautionList kinds={step.cautions} />

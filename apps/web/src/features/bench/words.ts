@@ -1,16 +1,5 @@
-// The bench screens' words for what a step records.
+// The bench screens' hints on what a step records (its name in words is stepRecordLabels, shared with the job sheet).
 import type { StepRecordKind } from '@bumperline/contracts/bench-vocabulary';
-
-export const recordLabels: Record<StepRecordKind, string> = {
-  check: 'Yes / no check',
-  readings: 'Readings',
-  diode_set: 'Diode test',
-  fuse: 'Fuse check',
-  power: 'Power check',
-  parts_used: 'Parts used',
-  photo: 'Photo',
-  note: 'Note',
-};
 
 /** What the technician does on a step of each kind, said under its title. */
 export const recordHints: Record<StepRecordKind, string> = {

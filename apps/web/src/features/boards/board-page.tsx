@@ -3,22 +3,22 @@
 // its bench jobs.
 import { lazy, Suspense, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
-import { CircleHelp, ClipboardList, Pencil, Wrench } from 'lucide-react';
+import { ChevronRight, CircleHelp, ClipboardList, Pencil, Wrench } from 'lucide-react';
 import { partKindLabels } from '@bumperline/contracts/bench-vocabulary';
 import type { BoardInstance, BoardPage as BoardPageData, BoardPartHistory } from '@bumperline/contracts/boards';
 import { useBoardPage, useEditBoard } from '../../api/boards.ts';
 import { useLocaleSettings } from '../../api/me.ts';
 import { useCan } from '../../api/use-can.ts';
+import { BoardFactsFields, boardFactsOf, boardFactsProblems } from '../../components/board-facts-fields.tsx';
 import { Field, inputClass } from '../../components/field.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
-import { recapLine, RecapStatusBadge } from '../../components/recap-status-badge.tsx';
+import { recapAdvice, recapLine, RecapStatusBadge } from '../../components/recap-status-badge.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
+import { VerdictBadge, verdictOfReading } from '../../components/verdict-badge.tsx';
 import { ApiError } from '../../lib/api-client.ts';
-import { dateCodeProblem } from '../../lib/date-code-check.ts';
 import { formatDate, formatDateTime, type LocaleSettings } from '../../lib/format.ts';
 import { paths } from '../../lib/paths.ts';
 import { formatDeviation, formatReadingValue } from './reading-format.ts';
-import { lookOf, VerdictMark } from './verdict-mark.tsx';
 
 // recharts comes with the first chart, not with the page.
 const ReadingChart = lazy(() => import('./reading-chart.tsx'));
@@ -118,9 +118,7 @@ function BoardFacts({ board: b }: { board: BoardInstance }) {
 
 function EditBoardForm({ board: b, onDone }: { board: BoardInstance; onDone: () => void }) {
   const edit = useEditBoard(b.id);
-  const [serial, setSerial] = useState(b.serial);
-  const [dateCode, setDateCode] = useState(b.dateCode);
-  const [lastRecapOn, setLastRecapOn] = useState(b.lastRecapOn ?? '');
+  const [facts, setFacts] = useState(() => boardFactsOf(b));
   const [notes, setNotes] = useState(b.notes);
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [formError, setFormError] = useState<string | null>(null);
@@ -131,11 +129,11 @@ function EditBoardForm({ board: b, onDone }: { board: BoardInstance; onDone: () 
       onSubmit={(e) => {
         e.preventDefault();
         setFormError(null);
-        const codeProblem = dateCodeProblem(dateCode);
-        setErrors(codeProblem ? { dateCode: codeProblem } : {});
-        if (codeProblem) return;
+        const problems = boardFactsProblems(facts);
+        setErrors(problems);
+        if (Object.keys(problems).length) return;
         edit.mutate(
-          { version: b.version, serial, dateCode, lastRecapOn: lastRecapOn || null, notes },
+          { version: b.version, ...facts, lastRecapOn: facts.lastRecapOn || null, notes },
           {
             onSuccess: onDone,
             onError: (err) => {
@@ -147,37 +145,7 @@ function EditBoardForm({ board: b, onDone }: { board: BoardInstance; onDone: () 
         );
       }}
     >
-      <Field label="Serial" error={errors.serial}>
-        {(p) => (
-          <input
-            {...p}
-            className={inputClass}
-            value={serial}
-            maxLength={60}
-            autoComplete="off"
-            onChange={(e) => setSerial(e.target.value)}
-          />
-        )}
-      </Field>
-      <Field
-        label="Date code as printed"
-        error={errors.dateCode}
-        hint="A code that reads two ways: write 20W12 for week 12 of 2020, 2012-01 for the year."
-      >
-        {(p) => (
-          <input
-            {...p}
-            className={inputClass}
-            value={dateCode}
-            maxLength={40}
-            autoComplete="off"
-            onChange={(e) => setDateCode(e.target.value)}
-          />
-        )}
-      </Field>
-      <Field label="Last recap" error={errors.lastRecapOn}>
-        {(p) => <input {...p} type="date" className={inputClass} value={lastRecapOn} onChange={(e) => setLastRecapOn(e.target.value)} />}
-      </Field>
+      <BoardFactsFields facts={facts} errors={errors} onChange={setFacts} />
       <Field label="Notes" error={errors.notes}>
         {(p) => (
           <textarea {...p} className={inputClass} rows={3} maxLength={2000} value={notes} onChange={(e) => setNotes(e.target.value)} />
@@ -203,6 +171,7 @@ function EditBoardForm({ board: b, onDone }: { board: BoardInstance; onDone: () 
 function RecapCard({ board: b }: { board: BoardInstance }) {
   const locale = useLocaleSettings();
   const r = b.recap;
+  const advice = recapAdvice(r, locale);
   return (
     <section className="card lg:col-span-2" aria-labelledby="board-recap">
       <h2 id="board-recap" className="mb-3 text-lg font-bold">
@@ -211,9 +180,9 @@ function RecapCard({ board: b }: { board: BoardInstance }) {
       <p className="flex flex-wrap items-center gap-2 text-lg font-semibold">
         <RecapStatusBadge status={r.status} /> {recapLine(r, locale)}
       </p>
-      {r.recommendation && (
+      {advice && (
         <p className={`mt-2 rounded-md p-2 font-semibold ${r.status === 'overdue' ? 'bg-down-tint text-down' : 'bg-shop-tint text-shop'}`}>
-          {r.recommendation.charAt(0).toUpperCase() + r.recommendation.slice(1)}
+          {advice}
         </p>
       )}
       {r.dueDate && (
@@ -271,8 +240,9 @@ function PartsHistory({ parts }: { parts: BoardPartHistory[] }) {
             </ul>
           )}
           {unread.length > 0 && (
-            <details className="mt-3 border-t border-paper-line pt-2" open={read.length === 0}>
-              <summary className="inline-flex min-h-11 cursor-pointer items-center font-semibold">
+            <details className="group mt-3 border-t border-paper-line pt-2" open={read.length === 0}>
+              <summary className="inline-flex min-h-11 cursor-pointer items-center gap-1 font-semibold">
+                <ChevronRight aria-hidden className="size-4 transition-transform group-open:rotate-90" />
                 {read.length === 0 ? `The parts list (${unread.length})` : `${unread.length} more parts without readings`}
               </summary>
               <ul className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-2 lg:grid-cols-3">
@@ -317,7 +287,7 @@ function PartLine({ part: p }: { part: BoardPartHistory }) {
               <strong className="tabular">
                 {latest.measured !== null ? formatReadingValue(latest.measured, latest.unit) : latest.measuredText}
               </strong>
-              <VerdictMark look={lookOf(latest)} short />
+              <VerdictBadge verdict={verdictOfReading(latest)} />
               {latest.deviationPercent !== null && (
                 <span className="tabular text-ink-soft">{formatDeviation(latest.deviationPercent)}</span>
               )}
@@ -338,8 +308,9 @@ function PartLine({ part: p }: { part: BoardPartHistory }) {
 
 function ReadingsTable({ part: p, locale }: { part: BoardPartHistory; locale: LocaleSettings | undefined }) {
   return (
-    <details className="mt-2">
-      <summary className="inline-flex min-h-11 cursor-pointer items-center text-sm font-semibold">
+    <details className="group mt-2">
+      <summary className="inline-flex min-h-11 cursor-pointer items-center gap-1 text-sm font-semibold">
+        <ChevronRight aria-hidden className="size-4 transition-transform group-open:rotate-90" />
         {p.designator}: all {p.readings.length} reading{p.readings.length === 1 ? '' : 's'} as a table
       </summary>
       {/* Focusable, so a keyboard can scroll the table sideways on a narrow screen. */}
@@ -377,7 +348,7 @@ function ReadingsTable({ part: p, locale }: { part: BoardPartHistory; locale: Lo
                   {r.inCircuit && <span className="text-ink-muted"> (in circuit)</span>}
                 </td>
                 <td className="px-2 py-1">
-                  <VerdictMark look={lookOf(r)} />
+                  <VerdictBadge verdict={verdictOfReading(r)} />
                 </td>
                 <td className="px-2 py-1 tabular whitespace-nowrap">
                   {r.min !== null && r.max !== null ? `${formatReadingValue(r.min, r.unit)} – ${formatReadingValue(r.max, r.unit)}` : '—'}

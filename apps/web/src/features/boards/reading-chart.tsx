@@ -1,24 +1,24 @@
 // One part's readings over the years as a small chart: the tolerance window as a band, each reading a point whose
-// shape and colour say its verdict (verdict-mark.tsx). Loaded on demand (recharts is large), so the board's page
+// icon and colour say its verdict (the verdict badge's own icon). Loaded on demand (recharts is large), so the board's page
 // shows its facts first. The same numbers are in a table beside it for screen readers and for reading exactly.
 import { CartesianGrid, Line, LineChart, ReferenceArea, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import type { PartReadingPoint } from '@bumperline/contracts/boards';
 import { formatReadingValue } from './reading-format.ts';
-import { lookOf, VerdictMark, VerdictShape, type VerdictLook } from './verdict-mark.tsx';
+import { VerdictBadge, VerdictIcon, verdictOfReading, type VerdictWord } from '../../components/verdict-badge.tsx';
 
 const YEAR_MS = 365.25 * 86_400_000;
 
 interface Point {
   t: number;
   v: number;
-  look: VerdictLook;
+  verdict: VerdictWord;
   reading: PartReadingPoint;
 }
 
 function DotFor(props: { cx?: number; cy?: number; payload?: Point; index?: number }) {
   const { cx, cy, payload } = props;
   if (cx === undefined || cy === undefined || !payload) return <g key={props.index} />;
-  return <VerdictShape key={props.index} look={payload.look} cx={cx} cy={cy} size={5} />;
+  return <VerdictIcon key={props.index} verdict={payload.verdict} cx={cx} cy={cy} />;
 }
 
 function TipContent({ active, payload, unit }: { active?: boolean; payload?: readonly { payload?: Point }[]; unit: string | null }) {
@@ -28,7 +28,7 @@ function TipContent({ active, payload, unit }: { active?: boolean; payload?: rea
     <div className="rounded-md border border-paper-line bg-white px-2 py-1 text-sm shadow">
       <div>{new Date(point.t).toISOString().slice(0, 10)}</div>
       <div className="font-semibold tabular">{formatReadingValue(point.v, unit)}</div>
-      <VerdictMark look={point.look} short />
+      <VerdictBadge verdict={point.verdict} />
     </div>
   );
 }
@@ -36,7 +36,7 @@ function TipContent({ active, payload, unit }: { active?: boolean; payload?: rea
 export default function ReadingChart({ readings, designator }: { readings: PartReadingPoint[]; designator: string }) {
   const points: Point[] = readings
     .filter((r) => r.measured !== null)
-    .map((r) => ({ t: Date.parse(r.takenAt), v: r.measured!, look: lookOf(r), reading: r }));
+    .map((r) => ({ t: Date.parse(r.takenAt), v: r.measured!, verdict: verdictOfReading(r), reading: r }));
   if (points.length === 0) return null;
   const latest = points[points.length - 1]!.reading;
   const unit = latest.unit;
@@ -51,7 +51,7 @@ export default function ReadingChart({ readings, designator }: { readings: PartR
   const first = points[0]!.t;
   const last = points[points.length - 1]!.t;
   const span = Math.max(last - first, YEAR_MS);
-  const looks = [...new Set(points.map((p) => p.look))];
+  const verdicts = [...new Set(points.map((p) => p.verdict))];
   // The axis names the window's edges (the numbers that matter) and any reading outside them.
   const ticks =
     min !== null && max !== null
@@ -110,8 +110,8 @@ export default function ReadingChart({ readings, designator }: { readings: PartR
             allowed {formatReadingValue(min, unit)} – {formatReadingValue(max, unit)}
           </span>
         )}
-        {looks.map((look) => (
-          <VerdictMark key={look} look={look} short />
+        {verdicts.map((verdict) => (
+          <VerdictBadge key={verdict} verdict={verdict} />
         ))}
       </figcaption>
     </figure>

@@ -2,26 +2,25 @@
 // the ones coming due; boards whose date code must be settled last. Filtered by status in the address bar.
 import { useState } from 'react';
 import { Link, useSearchParams } from 'react-router-dom';
-import { recapStatuses, type RecapFleetRow, type RecapStatus } from '@bumperline/contracts/boards';
+import { recapStatuses } from '@bumperline/contracts/bench-vocabulary';
+import type { RecapFleetRow } from '@bumperline/contracts/boards';
 import { useRecapDue } from '../../api/boards.ts';
 import { useLocaleSettings } from '../../api/me.ts';
 import { FilterSelect } from '../../components/filter-select.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
-import { recapLine, recapStatusLabels, RecapStatusBadge } from '../../components/recap-status-badge.tsx';
+import { recapAdvice, recapLine, recapStatusLabels, RecapStatusBadge } from '../../components/recap-status-badge.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { formatDate } from '../../lib/format.ts';
 import { paths } from '../../lib/paths.ts';
+import { recapStatusFilter } from './boards-queries.ts';
 
 const PAGE = 100;
 
 const countWords = { overdue: 'overdue', 'due-soon': 'due soon', ok: 'not due yet', unknown: 'with a date code to settle' } as const;
 
-const isStatus = (s: string | null): s is RecapStatus => recapStatuses.includes(s as RecapStatus);
-
 export function RecapDuePage() {
   const [sp, setSp] = useSearchParams();
-  const raw = sp.get('status');
-  const status = isStatus(raw) ? raw : undefined;
+  const status = recapStatusFilter(sp);
   const fleet = useRecapDue(status);
   const locale = useLocaleSettings();
   const [shown, setShown] = useState(PAGE);
@@ -41,7 +40,7 @@ export function RecapDuePage() {
         <FilterSelect
           label="Status"
           value={status ?? ''}
-          anyLabel="All that need a recap"
+          anyLabel="All boards"
           wide
           onChange={(v) => {
             setShown(PAGE);
@@ -89,6 +88,7 @@ export function RecapDuePage() {
 function FleetLine({ row }: { row: RecapFleetRow }) {
   const locale = useLocaleSettings();
   const r = row.recap;
+  const advice = recapAdvice(r, locale);
   return (
     <li className="grid gap-2 py-3 md:grid-cols-[minmax(16rem,2fr)_3fr]">
       <div>
@@ -117,8 +117,8 @@ function FleetLine({ row }: { row: RecapFleetRow }) {
       <div>
         <p className="flex flex-wrap items-center gap-x-2 gap-y-1">
           <RecapStatusBadge status={r.status} />
-          {r.status === 'overdue' && r.recommendation ? (
-            <span className="font-semibold text-down">{r.recommendation.charAt(0).toUpperCase() + r.recommendation.slice(1)}</span>
+          {r.status === 'overdue' && advice ? (
+            <span className="font-semibold text-down">{advice}</span>
           ) : (
             <>
               <span className="font-semibold">{recapLine(r, locale)}</span>
@@ -130,9 +130,7 @@ function FleetLine({ row }: { row: RecapFleetRow }) {
             </>
           )}
         </p>
-        {r.status !== 'overdue' && r.recommendation && (
-          <p className="mt-1 text-sm font-semibold text-shop">{r.recommendation.charAt(0).toUpperCase() + r.recommendation.slice(1)}</p>
-        )}
+        {r.status !== 'overdue' && advice && <p className="mt-1 text-sm font-semibold text-shop">{advice}</p>}
         {r.defaultProfile && r.dueDate && (
           <p className="mt-1 text-xs text-ink-muted">Assumed cabinet day: the game has no temperature profile.</p>
         )}

@@ -192,7 +192,8 @@ function CallView({ detail }: { detail: CallDetail }) {
             ) : (
               <ul className="grid gap-2">
                 {detail.messages.map((m) => (
-                  <li key={m.id} className="rounded-md border border-paper-line p-2 text-sm">
+                  // A status link in a text has no spaces to break at: wrap it anywhere rather than widen the page.
+                  <li key={m.id} className="rounded-md border border-paper-line p-2 text-sm wrap-anywhere">
                     <p className="font-semibold">
                       {m.channel === 'sms' ? 'SMS' : 'E-mail'} to {m.toAddress} · {m.status}
                       {m.providerStatus ? ` (${m.providerStatus})` : ''}

@@ -16,7 +16,7 @@ export interface CellHandlers {
 /** Widths that keep a row on one line at desktop size; the table scrolls sideways on a phone. */
 const WIDTHS: Record<GridField, string> = {
   designator: 'w-20',
-  kind: 'w-48',
+  kind: 'w-56',
   value: 'w-40',
   tolerance: 'w-24',
   rating: 'w-28',
