@@ -17,6 +17,14 @@ export const cautions: Record<CautionKind, Caution> = {
       'checked on a live source. Never work on a powered supply alone. Mains wiring is for qualified people: follow ' +
       'local electrical codes and licensed practice.',
   },
+  live_work: {
+    title: 'Measuring a live supply',
+    text:
+      'The supply is switched on for this step: its primary side, heat sinks and filter capacitors can be at mains ' +
+      'voltage. Connect the meter with the power off, then switch on; use probes and a meter rated for mains (CAT II or ' +
+      'better), keep one hand away from the board, and never work on a live supply alone. Where local practice calls ' +
+      'for an isolation transformer or a current-limiting lamp, use one. Follow local electrical codes and licensed practice.',
+  },
   charged_capacitors: {
     title: 'Charged capacitors',
     text:

@@ -30,7 +30,8 @@ export const partKindLabels: Record<PartKind, string> = {
 };
 
 /** The hazards a bench step can involve; each carries the usual caution, acknowledged before the step is ticked. */
-export const cautionKinds = ['mains', 'charged_capacitors', 'hot_iron', 'solder_fumes', 'leaded_solder'] as const;
+/** `mains` is for opening and handling a supply that must be dead; `live_work` for measuring one that is running. */
+export const cautionKinds = ['mains', 'live_work', 'charged_capacitors', 'hot_iron', 'solder_fumes', 'leaded_solder'] as const;
 export type CautionKind = (typeof cautionKinds)[number];
 
 /** What a template step asks the technician to record. */

@@ -16,7 +16,9 @@ describe('the demo bench-job templates', () => {
     for (const key of ['rectifiers', 'connectors', 'reflow', 'recap']) {
       expect(byKey.get(key)!.cautions, key).toEqual(['hot_iron', 'solder_fumes', 'leaded_solder']);
     }
-    expect(byKey.get('power-up')!.cautions).toContain('mains');
+    // Steps run with the supply switched on carry the live-work caution, not the unplug-first one.
+    expect(byKey.get('power-up')!.cautions).toEqual(['live_work']);
+    expect(byKey.get('load-resistors')!.cautions).toEqual(['live_work']);
     // Nothing names a caution the bench does not know.
     for (const step of powerSupplyRecapTemplate.steps) for (const c of step.cautions) expect(cautionKinds).toContain(c);
   });

@@ -126,7 +126,7 @@ export const powerSupplyRecapTemplate: DemoTemplate = {
         'With the supply on the bench, connected to its load or a dummy load, switch on through a lamp limiter and read ' +
         'each output at the far end of the harness. Note the voltages read (e.g. +5.02 V, +12.1 V, 50.4 V).',
       record: 'check',
-      cautions: ['mains'],
+      cautions: ['live_work'],
     }),
     step({
       key: 'load-resistors',
@@ -136,7 +136,7 @@ export const powerSupplyRecapTemplate: DemoTemplate = {
         'what it dissipates with its wattage at half its rating.',
       record: 'power',
       designators: ['R7', 'R8', 'R12'],
-      cautions: ['mains'],
+      cautions: ['live_work'],
     }),
     step({
       key: 'photo',
@@ -180,7 +180,7 @@ export const soundBoardReflowTemplate: DemoTemplate = {
       title: 'Power up and listen',
       instructions: 'Refit the board, switch on and run the sound test: no crackle when the harness is flexed, no hum.',
       record: 'check',
-      cautions: ['mains'],
+      cautions: ['live_work'],
     }),
   ],
 };

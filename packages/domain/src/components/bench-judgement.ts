@@ -135,7 +135,9 @@ export interface DiodeReadingKey {
 }
 
 function probe(key: string, red: BridgeTerminal, black: BridgeTerminal, required: boolean): DiodeReadingKey {
-  return { key, red, black, label: `red on ${red}, black on ${black}`, required };
+  // Printed with the true minus sign (U+2212), as the board's silkscreen and a datasheet write it.
+  const name = (t: BridgeTerminal) => (t === '-' ? '−' : t);
+  return { key, red, black, label: `red on ${name(red)}, black on ${name(black)}`, required };
 }
 
 /** The readings a bridge rectifier takes, by key as stored in a bench job's draft. */

@@ -110,7 +110,7 @@ export function checkFuseReplacement(circuit: FuseRating | string, candidate: Fu
     refusals.push(
       offered.amps > required.amps
         ? `${offered.amps} A is higher than the ${required.amps} A the circuit needs: it would not blow in time — fire risk`
-        : `${offered.amps} A is lower than the ${required.amps} A the circuit needs: it would blow in normal running (nuisance blowing, common practice)`,
+        : `${offered.amps} A is lower than the ${required.amps} A the circuit needs: it would blow in normal running (nuisance blowing)`,
     );
   }
 
@@ -120,7 +120,7 @@ export function checkFuseReplacement(circuit: FuseRating | string, candidate: Fu
     refusals.push(
       slower
         ? `${SPEED_WORDS[offered.speed]} is slower than the ${SPEED_WORDS[required.speed]} the circuit needs: it lets damaging current through for longer`
-        : `${SPEED_WORDS[offered.speed]} is faster than the ${SPEED_WORDS[required.speed]} the circuit needs: switch-on surges will blow it (nuisance blowing, common practice)`,
+        : `${SPEED_WORDS[offered.speed]} is faster than the ${SPEED_WORDS[required.speed]} the circuit needs: switch-on surges will blow it (nuisance blowing)`,
     );
   }
 
