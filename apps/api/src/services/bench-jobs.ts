@@ -18,7 +18,7 @@ import { getBenchTemplate } from '@bumperline/db/queries/bench-templates';
 import { getBoardInstance, updateBoardInstance } from '@bumperline/db/queries/board-instances';
 import { getCallRow } from '@bumperline/db/queries/calls';
 import { insertPartReadings, type PartReadingInsert } from '@bumperline/db/queries/part-readings';
-import type { BenchEvaluation } from '@bumperline/domain/components/bench-judgement';
+import { diodeSetText, type BenchEvaluation } from '@bumperline/domain/components/bench-judgement';
 import { benchJobView, judgeBenchDraft } from './bench-job-view.ts';
 import { companyToday } from './company-today.ts';
 import { Conflict, InvalidInput, NotFound } from './workflow-errors.ts';
@@ -148,10 +148,7 @@ function readingRows(job: BenchJobRow, evaluation: BenchEvaluation, takenBy: str
     ...evaluation.diodeSets.map((d) => ({
       ...common,
       partId: d.partId,
-      measuredText: Object.entries(d.readings)
-        .filter(([, text]) => text.trim() !== '')
-        .map(([key, text]) => `${key} ${text.trim()}`)
-        .join(' / '),
+      measuredText: diodeSetText(d.readings),
       measured: null,
       unit: null,
       inCircuit: false,

@@ -6,6 +6,7 @@
 import type { BenchJobDraft, BenchStep, BenchStepProgress } from '@bumperline/contracts/bench-vocabulary';
 import {
   BRIDGE_READING_KEYS,
+  diodeSetText,
   judgeDiodeSet,
   judgeReading,
   partsForStep,
@@ -455,9 +456,7 @@ export class CompanyBench {
             board_instance_id: instanceId,
             part_id: p.id,
             bench_job_id: jobId,
-            measured_text: Object.entries(readings)
-              .map(([key, text]) => `${key} ${text}`)
-              .join(' / '),
+            measured_text: diodeSetText(readings),
             measured: null,
             unit: null,
             in_circuit: false,

@@ -8,6 +8,7 @@ import {
   judgeReading,
   partsForStep,
   storedReadingText,
+  diodeSetText,
   type BenchJobDraftInput,
   type BenchPart,
   type BenchStepInput,
@@ -268,5 +269,12 @@ describe('evaluateBenchJob', () => {
     expect(evaluateBenchJob({ steps, draft, parts }).problems).toEqual([
       { field: 'steps.inspect.answer', message: 'answer yes or no before ticking this step' },
     ]);
+  });
+});
+
+describe('diodeSetText', () => {
+  it('writes the readings typed, in order, leaving out blanks', () => {
+    expect(diodeSetText({ forward: ' 0.55 ', reverse: 'OL', extra: '  ' })).toBe('forward 0.55 / reverse OL');
+    expect(diodeSetText({})).toBe('');
   });
 });

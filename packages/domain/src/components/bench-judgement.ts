@@ -66,6 +66,14 @@ export function storedReadingText(r: { measured: number | null; unit: string | n
   return r.measured !== null && UNITS.includes(r.unit as Unit) ? formatMeasured(r.measured, r.unit as Unit) : r.measuredText;
 }
 
+/** A diode set's readings as one line for its history and the job sheet: "forward 0.55 / reverse OL" (blanks left out). */
+export function diodeSetText(readings: Readonly<Record<string, string>>): string {
+  return Object.entries(readings)
+    .filter(([, text]) => text.trim() !== '')
+    .map(([key, text]) => `${key} ${text.trim()}`)
+    .join(' / ');
+}
+
 function writtenUnit(text: string): string | null {
   return /([A-Za-zµμΩΩ]+)\s*$/.exec(text.trim())?.[1] ?? null;
 }

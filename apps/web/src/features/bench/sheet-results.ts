@@ -1,7 +1,7 @@
 // What a job sheet lists, from either source: a finished job's evaluation as the server stored it, or (for a job
 // still open) the same judgement worked out here by the domain from the draft.
 import type { BenchJob, BenchJobEvaluation } from '@bumperline/contracts/bench-jobs';
-import { evaluateBenchJob, formatDeviation, storedReadingText } from '@bumperline/domain/components/bench-judgement';
+import { diodeSetText, evaluateBenchJob, formatDeviation, storedReadingText } from '@bumperline/domain/components/bench-judgement';
 import type { JobPart } from './job-parts.ts';
 
 export interface SheetReading {
@@ -89,10 +89,7 @@ export function fromDraft(job: Pick<BenchJob, 'steps' | 'draft'>, parts: readonl
         stepKey: d.stepKey,
         partId: d.partId,
         designator: d.designator,
-        measuredText: Object.entries(d.readings)
-          .filter(([, v]) => v.trim() !== '')
-          .map(([k, v]) => `${k} ${v}`)
-          .join(' / '),
+        measuredText: diodeSetText(d.readings),
         windowText: null,
         deviationText: null,
         verdict: d.verdict === 'pass' ? ('pass' as const) : ('fail' as const),
