@@ -236,6 +236,62 @@ describe('the recap list', () => {
     expect(overdue.body.items.every((r: { recap: { status: string } }) => r.recap.status === 'overdue')).toBe(true);
   });
 
+  it('sends the ranking a page at a time: the pages joined are the whole ranking, the counts cover every board', async () => {
+    const gameId = await addGame(t.db, a);
+    for (const serial of ['PAGE-1', 'PAGE-2', 'PAGE-3']) await fit(gameId, { serial, dateCode: '8934' }).expect(201);
+    type Row = { boardInstanceId: string; recap: { status: string } };
+    const whole = await owner.get('/api/recap-due').query({ limit: 200 }).expect(200);
+    const everyRow = whole.body.items as Row[];
+    expect(whole.body.nextCursor).toBeNull();
+    expect(everyRow.length).toBeGreaterThan(5);
+
+    const joined: Row[] = [];
+    const pageCounts: unknown[] = [];
+    let cursor: string | undefined;
+    do {
+      const page = await owner
+        .get('/api/recap-due')
+        .query({ limit: 2, ...(cursor ? { cursor } : {}) })
+        .expect(200);
+      expect(page.body.items.length).toBeLessThanOrEqual(2);
+      joined.push(...(page.body.items as Row[]));
+      pageCounts.push(page.body.counts);
+      cursor = page.body.nextCursor ?? undefined;
+    } while (cursor && joined.length <= everyRow.length);
+    expect(joined.map((r) => r.boardInstanceId)).toEqual(everyRow.map((r) => r.boardInstanceId));
+    // Every page answers the whole company's counts, one per status (0 included), however far down it is.
+    for (const c of pageCounts) expect(c).toEqual(whole.body.counts);
+    const counts = whole.body.counts as Record<string, number>;
+    expect(Object.keys(counts).sort()).toEqual(['due-soon', 'no-electrolytics', 'ok', 'overdue', 'unknown']);
+    expect(Object.values(counts).reduce((x, y) => x + y, 0)).toBe(await instanceCount(a.tenantId));
+    expect(everyRow.length).toBe((await instanceCount(a.tenantId)) - counts['no-electrolytics']!);
+    for (const status of ['overdue', 'unknown'] as const) {
+      expect(everyRow.filter((r) => r.recap.status === status).length).toBe(counts[status]);
+    }
+
+    // Without a limit: 50 a page.
+    const first = await owner.get('/api/recap-due').expect(200);
+    expect(first.body.items.length).toBe(Math.min(50, everyRow.length));
+
+    // A filtered list pages too, and stays on its status.
+    const overdue = await owner.get('/api/recap-due').query({ status: 'overdue', limit: 1 }).expect(200);
+    const second = await owner.get('/api/recap-due').query({ status: 'overdue', limit: 1, cursor: overdue.body.nextCursor }).expect(200);
+    expect(second.body.items[0].boardInstanceId).toBe(everyRow.filter((r) => r.recap.status === 'overdue')[1]!.boardInstanceId);
+  });
+
+  it('refuses a page size out of range and a cursor it did not give, naming the field', async () => {
+    for (const limit of ['0', '201', 'ten', '2.5']) {
+      const res = await owner.get('/api/recap-due').query({ limit }).expect(400);
+      expect(res.body.errors.map((e: { field: string }) => e.field)).toEqual(['limit']);
+    }
+    const wrongShape = Buffer.from(JSON.stringify(['["x"]', randomUUID()])).toString('base64url');
+    const wrongGroup = Buffer.from(JSON.stringify(['[9,"","",""]', randomUUID()])).toString('base64url');
+    for (const cursor of ['not-a-cursor', wrongShape, wrongGroup, 'x'.repeat(501)]) {
+      const res = await owner.get('/api/recap-due').query({ cursor }).expect(400);
+      expect(res.body.errors.map((e: { field: string }) => e.field)).toEqual(['cursor']);
+    }
+  });
+
   it('uses the game’s own profile once saved', async () => {
     const gameId = await addGame(t.db, a);
     const board = (await fit(gameId, { serial: 'PROFILED', dateCode: '8934' }).expect(201)).body;

@@ -442,7 +442,8 @@ const endpoints: Record<string, Endpoint> = {
         .set(JSON_HEADERS)
         .send({ slices: [{ hours: 12, temperatureC: 40 }] }),
   },
-  'GET /api/recap-due': { as: 'owner', status: 200, answer: recapFleet, probe: (a) => a.get('/api/recap-due') },
+  // A page of one, so the answer carries a next cursor too.
+  'GET /api/recap-due': { as: 'owner', status: 200, answer: recapFleet, probe: (a) => a.get('/api/recap-due?limit=1') },
 
   // Bench-job templates and bench jobs.
   'GET /api/bench-templates': { as: 'owner', status: 200, answer: benchTemplateList, probe: (a) => a.get('/api/bench-templates') },

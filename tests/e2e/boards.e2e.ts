@@ -9,11 +9,16 @@ interface FleetRow {
   recap: { status: string };
 }
 
-/** The demo's recap list as the API gives it, to find a board with history and a game with boards. */
-async function fleet(page: Page): Promise<FleetRow[]> {
-  const res = await page.request.get('/api/recap-due');
+interface Fleet {
+  items: FleetRow[];
+  counts: Record<string, number>;
+}
+
+/** The demo's recap list as the API gives it (its largest page), to find a board with history and a game with boards. */
+async function fleet(page: Page): Promise<Fleet> {
+  const res = await page.request.get('/api/recap-due?limit=200');
   expect(res.ok()).toBe(true);
-  return ((await res.json()) as { items: FleetRow[] }).items;
+  return (await res.json()) as Fleet;
 }
 
 async function boardWithHistory(page: Page, rows: FleetRow[]): Promise<string> {
@@ -30,7 +35,8 @@ for (const width of [1280, 390]) {
     const check = failOnConsoleErrors(page);
     await page.setViewportSize({ width, height: width > 600 ? 900 : 844 });
     await signIn(page, demo.technician);
-    const rows = await fleet(page);
+    const { items: rows, counts } = await fleet(page);
+    const listed = Object.values(counts).reduce((a, b) => a + b, 0) - counts['no-electrolytics']!;
     const overdue = rows.find((r) => r.recap.status === 'overdue' && r.gameId)!;
     expect(overdue).toBeTruthy();
 
@@ -65,6 +71,18 @@ for (const width of [1280, 390]) {
     await page.getByRole('link', { name: 'Recap due' }).click();
     await expect(page.getByRole('heading', { name: 'Recap due' })).toBeVisible();
     await expect(page.getByText(/recap now: overdue since/i).first()).toBeVisible();
+    // One page of the ranking, with where it stands in the whole list; Next and Previous walk the pages.
+    const shown = Math.min(50, listed);
+    await expect(page.getByText(`Boards 1–${shown} of ${listed.toLocaleString('en-US')}`)).toBeVisible();
+    await expect(page.getByRole('region', { name: 'Boards by recap due' }).getByRole('listitem')).toHaveCount(shown);
+    if (listed > 50) {
+      await page.getByRole('button', { name: 'Next' }).click();
+      await expect(page).toHaveURL(/cursor=/);
+      await expect(page.getByText(`Boards 51–${Math.min(100, listed)} of`)).toBeVisible();
+      await page.getByRole('button', { name: 'Previous' }).click();
+      await expect(page.getByText(`Boards 1–${shown} of`)).toBeVisible();
+    }
+    await expect(page.getByRole('button', { name: 'Previous' })).toBeDisabled();
     await page.getByLabel('Status').selectOption('due-soon');
     await expect(page).toHaveURL(/status=due-soon/);
     await page.getByLabel('Status').selectOption('');

@@ -65,6 +65,10 @@ export type ReadingVerdictWord = (typeof readingVerdicts)[number];
 export const recapStatuses = ['overdue', 'due-soon', 'ok', 'unknown', 'no-electrolytics'] as const;
 export type RecapStatus = (typeof recapStatuses)[number];
 
+/** The recap list's default and largest page: the server ranks every board but sends only a page of them. */
+export const RECAP_FLEET_PAGE = 50;
+export const RECAP_FLEET_MAX_PAGE = 200;
+
 /** One step of a bench-job template (kept as JSON on the template, copied onto each job when it opens). */
 export interface BenchStep {
   /** Stable within the template: "inspect", "fuses", "measure-resistors". */

@@ -1,8 +1,8 @@
 // Boards fitted in games (serial, date code as printed, last recap), every reading taken on their parts, the
 // cabinet's temperature through the day, and when each board is due for a recap.
 import { z } from 'zod';
-import { readingVerdicts, benchJobStates, recapStatuses } from './bench-vocabulary.ts';
-import { isoDate, isoDateTime, rowVersion, shortText, uuid } from './common.ts';
+import { readingVerdicts, benchJobStates, recapStatuses, RECAP_FLEET_MAX_PAGE, RECAP_FLEET_PAGE } from './bench-vocabulary.ts';
+import { isoDate, isoDateTime, pageOf, rowVersion, shortText, uuid } from './common.ts';
 import { partRow } from './parts-lists.ts';
 
 // ---- A board in a game ----
@@ -166,6 +166,14 @@ export type CabinetProfile = z.infer<typeof cabinetProfile>;
 
 export const recapFleetQuery = z.strictObject({
   status: z.enum(recapStatuses).optional(),
+  /** Where the previous page ended in the ranking (the `nextCursor` it answered). */
+  cursor: z.string().max(500, { error: 'is not a cursor this list gave' }).optional(),
+  limit: z.coerce
+    .number({ error: 'must be a number' })
+    .int({ error: 'must be a whole number' })
+    .min(1, { error: 'must be at least 1' })
+    .max(RECAP_FLEET_MAX_PAGE, { error: `must be at most ${RECAP_FLEET_MAX_PAGE}` })
+    .default(RECAP_FLEET_PAGE),
 });
 export type RecapFleetQuery = z.input<typeof recapFleetQuery>;
 
@@ -183,12 +191,11 @@ export const recapFleetRow = z.strictObject({
 });
 export type RecapFleetRow = z.infer<typeof recapFleetRow>;
 
-export const recapFleet = z.strictObject({
+/** One page of the ranking (overdue first, then by remaining life; boards whose date cannot be worked out last). */
+export const recapFleet = pageOf(recapFleetRow).extend({
   /** The company's today the list was worked out for. */
   asOf: isoDate,
-  /** Every board of the company by status, before the filter. */
-  counts: z.partialRecord(z.enum(recapStatuses), z.number().int()),
-  /** Overdue first, then by remaining life; boards whose date cannot be worked out last. */
-  items: z.array(recapFleetRow),
+  /** Every board of the company by status, before the filter and the paging (0 for a status with none). */
+  counts: z.record(z.enum(recapStatuses), z.number().int()),
 });
 export type RecapFleet = z.infer<typeof recapFleet>;

@@ -97,8 +97,8 @@ export function boardsRouter(scoped: ReturnType<typeof makeScoped>): Router {
   r.get(
     '/recap-due',
     scoped('bench:read', async ({ tx, req, actor }) => {
-      const { status } = parse(recapFleetQuery, req.query);
-      return recapFleet(tx, await companyToday(tx, actor.tenantId), status);
+      const query = parse(recapFleetQuery, req.query);
+      return recapFleet(tx, await companyToday(tx, actor.tenantId), query);
     }),
   );
 

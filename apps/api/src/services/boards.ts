@@ -12,6 +12,7 @@ import type {
   RecapFleetRow,
   RecapStatus,
 } from '@bumperline/contracts/boards';
+import { recapStatuses } from '@bumperline/contracts/bench-vocabulary';
 import type { Tx } from '@bumperline/db/client';
 import {
   getBoardInstance,
@@ -31,6 +32,7 @@ import { listReadingsOfBoardInstance } from '@bumperline/db/queries/part-reading
 import { parseManufactureDate } from '@bumperline/domain/components/date-codes';
 import { DomainError } from '@bumperline/domain/errors';
 import { DEFAULT_CABINET_SLICES, estimateRecap, rememberedLives, type CabinetSliceRow, type ElectrolyticRow } from './board-recap.ts';
+import { rankedPage } from './recap-ranking.ts';
 import { Conflict, InvalidInput, NotFound } from './workflow-errors.ts';
 
 type Field = { field: string; message: string };
@@ -234,22 +236,16 @@ export async function setCabinetProfile(tx: Tx, gameId: string, slices: CabinetS
   };
 }
 
-const statusRank: Record<RecapStatus, number> = { overdue: 0, 'due-soon': 1, ok: 1, unknown: 2, 'no-electrolytics': 3 };
-
-/** Overdue first (longest overdue at the top), then by the date due (least life left first); undated boards last. */
-export function compareRecapRows(a: RecapFleetRow, b: RecapFleetRow): number {
-  const rank = statusRank[a.recap.status] - statusRank[b.recap.status];
-  if (rank !== 0) return rank;
-  const due = (a.recap.dueDate ?? '').localeCompare(b.recap.dueDate ?? '');
-  if (due !== 0) return due;
-  return (a.gameLabel ?? '').localeCompare(b.gameLabel ?? '') || a.serial.localeCompare(b.serial);
-}
-
 /**
  * Every board of the company, judged as of `today`, ranked; counts by status before the filter. Boards with no
- * electrolytics have nothing to recap: they are listed only when asked for by that status.
+ * electrolytics have nothing to recap: they are listed only when asked for by that status. One page is sent.
  */
-export async function recapFleet(tx: Tx, today: string, status: RecapStatus | undefined): Promise<RecapFleet> {
+export async function recapFleet(
+  tx: Tx,
+  today: string,
+  query: { status?: RecapStatus | undefined; limit: number; cursor?: string | undefined },
+): Promise<RecapFleet> {
+  const { status } = query;
   // Two statements: the boards with their games' cabinet days, then the electrolytics of the boards' designs.
   const rows = await listFleetBoardInstances(tx);
   const inputs: RecapInputs = {
@@ -272,8 +268,9 @@ export async function recapFleet(tx: Tx, today: string, status: RecapStatus | un
     venueName: r.venueName,
     recap: estimateRecap(r, inputs.electrolytics.get(r.boardId) ?? [], profileFor(inputs, r.gameId), today, livesOf(r.boardId)),
   }));
-  const counts: RecapFleet['counts'] = {};
-  for (const row of all) counts[row.recap.status] = (counts[row.recap.status] ?? 0) + 1;
-  const items = all.filter((r) => (status ? r.recap.status === status : r.recap.status !== 'no-electrolytics')).sort(compareRecapRows);
-  return { asOf: today, counts, items };
+  const counts = Object.fromEntries(recapStatuses.map((s) => [s, 0])) as RecapFleet['counts'];
+  for (const row of all) counts[row.recap.status] += 1;
+  const listed = all.filter((r) => (status ? r.recap.status === status : r.recap.status !== 'no-electrolytics'));
+  // The whole ranking is worked out (it is cheap); only the page asked for is sent.
+  return { asOf: today, counts, ...rankedPage(listed, query.limit, query.cursor) };
 }

@@ -19,7 +19,8 @@ export const boardKeys = {
   ofGame: (gameId: string) => ['boards', 'game', gameId] as const,
   page: (id: string) => ['boards', 'page', id] as const,
   cabinet: (gameId: string) => ['boards', 'cabinet', gameId] as const,
-  recapDue: (status: RecapStatus | undefined) => ['boards', 'recap-due', status ?? 'all'] as const,
+  recapDue: (status: RecapStatus | undefined, cursor: string | undefined) =>
+    ['boards', 'recap-due', status ?? 'all', cursor ?? 'first'] as const,
 };
 
 export const gameBoardsQuery = (gameId: string) =>
@@ -28,13 +29,17 @@ export const boardPageQuery = (id: string) =>
   queryOptions({ queryKey: boardKeys.page(id), queryFn: () => get<BoardPage>(`/api/board-instances/${id}`) });
 export const cabinetProfileQuery = (gameId: string) =>
   queryOptions({ queryKey: boardKeys.cabinet(gameId), queryFn: () => get<CabinetProfile>(`/api/games/${gameId}/cabinet-profile`) });
-export const recapDueQuery = (status: RecapStatus | undefined) =>
-  queryOptions({ queryKey: boardKeys.recapDue(status), queryFn: () => get<RecapFleet>('/api/recap-due', { status }) });
+/** One page of the recap ranking (the server's page size), after `cursor`. */
+export const recapDueQuery = (status: RecapStatus | undefined, cursor: string | undefined) =>
+  queryOptions({
+    queryKey: boardKeys.recapDue(status, cursor),
+    queryFn: () => get<RecapFleet>('/api/recap-due', { status, cursor }),
+  });
 
 export const useGameBoards = (gameId: string) => useQuery(gameBoardsQuery(gameId));
 export const useBoardPage = (id: string) => useQuery(boardPageQuery(id));
 export const useCabinetProfile = (gameId: string) => useQuery(cabinetProfileQuery(gameId));
-export const useRecapDue = (status: RecapStatus | undefined) => useQuery(recapDueQuery(status));
+export const useRecapDue = (status: RecapStatus | undefined, cursor: string | undefined) => useQuery(recapDueQuery(status, cursor));
 
 /** Recap dates depend on boards and profiles alike: any change refreshes every board view. */
 const refreshBoards = (qc: ReturnType<typeof useQueryClient>) => qc.invalidateQueries({ queryKey: boardKeys.all });

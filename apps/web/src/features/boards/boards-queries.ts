@@ -16,5 +16,5 @@ export function prefetchBoard(ahead: FetchAhead, role: Role, _url: URL, params: 
 }
 
 export function prefetchRecapDue(ahead: FetchAhead, role: Role, url: URL) {
-  if (can(role, 'bench:read')) ahead(recapDueQuery(recapStatusFilter(url.searchParams)));
+  if (can(role, 'bench:read')) ahead(recapDueQuery(recapStatusFilter(url.searchParams), url.searchParams.get('cursor') ?? undefined));
 }

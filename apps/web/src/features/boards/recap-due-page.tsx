@@ -1,30 +1,30 @@
 // Every board of the company ranked by the life its electrolytics have left: overdue first, with what to do, then
-// the ones coming due; boards whose date code must be settled last. Filtered by status in the address bar.
-import { useState } from 'react';
+// the ones coming due; boards whose date code must be settled last. Filtered by status and paged in the address bar:
+// the server ranks every board and sends one page with the counts of the whole company.
+import { ChevronLeft, ChevronRight } from 'lucide-react';
 import { Link, useSearchParams } from 'react-router-dom';
-import { recapStatuses } from '@bumperline/contracts/bench-vocabulary';
-import type { RecapFleetRow } from '@bumperline/contracts/boards';
+import { RECAP_FLEET_PAGE, recapStatuses, type RecapStatus } from '@bumperline/contracts/bench-vocabulary';
+import type { RecapFleet, RecapFleetRow } from '@bumperline/contracts/boards';
 import { useRecapDue } from '../../api/boards.ts';
 import { useLocaleSettings } from '../../api/me.ts';
 import { FilterSelect } from '../../components/filter-select.tsx';
 import { PageHeader } from '../../components/page-header.tsx';
 import { recapAdvice, recapLine, recapStatusLabels, RecapStatusBadge } from '../../components/recap-status-badge.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
+import { useListParams } from '../../components/use-list-params.ts';
 import { formatDate } from '../../lib/format.ts';
 import { paths } from '../../lib/paths.ts';
 import { recapStatusFilter } from './boards-queries.ts';
 
-const PAGE = 100;
-
 const countWords = { overdue: 'overdue', 'due-soon': 'due soon', ok: 'not due yet', unknown: 'with a date code to settle' } as const;
 
 export function RecapDuePage() {
-  const [sp, setSp] = useSearchParams();
+  const [sp] = useSearchParams();
+  const list = useListParams('rank', statusKey);
   const status = recapStatusFilter(sp);
-  const fleet = useRecapDue(status);
+  const fleet = useRecapDue(status, list.params.cursor);
   const locale = useLocaleSettings();
-  const [shown, setShown] = useState(PAGE);
-  const counts = fleet.data?.counts ?? {};
+  const counts: Partial<RecapFleet['counts']> = fleet.data?.counts ?? {};
 
   return (
     <>
@@ -42,10 +42,7 @@ export function RecapDuePage() {
           value={status ?? ''}
           anyLabel="All boards"
           wide
-          onChange={(v) => {
-            setShown(PAGE);
-            setSp(v ? { status: v } : {}, { replace: true });
-          }}
+          onChange={(v) => list.setFilter('status', v)}
           options={recapStatuses.map((s) => ({ value: s, label: `${recapStatusLabels[s]} (${counts[s] ?? 0})` }))}
         />
         {fleet.data && (
@@ -69,20 +66,45 @@ export function RecapDuePage() {
         ) : (
           <>
             <ol className="divide-y divide-paper-line">
-              {fleet.data.items.slice(0, shown).map((row) => (
+              {fleet.data.items.map((row) => (
                 <FleetLine key={row.boardInstanceId} row={row} />
               ))}
             </ol>
-            {fleet.data.items.length > shown && (
-              <button type="button" className="btn-secondary mt-3" onClick={() => setShown((n) => n + PAGE)}>
-                Show {Math.min(PAGE, fleet.data.items.length - shown)} more of {fleet.data.items.length - shown}
-              </button>
-            )}
+            <nav aria-label="Pages" className="flex flex-wrap items-center justify-end gap-x-4 gap-y-2 border-t border-paper-line pt-3">
+              <p className="mr-auto text-sm text-ink-soft">{pagePosition(fleet.data, status, pagesBefore(list.params))}</p>
+              <div className="flex gap-2">
+                <button type="button" className="btn-secondary" onClick={list.prevPage} disabled={!list.params.cursor}>
+                  <ChevronLeft aria-hidden className="size-4" /> Previous
+                </button>
+                <button
+                  type="button"
+                  className="btn-secondary"
+                  onClick={() => fleet.data?.nextCursor && list.nextPage(fleet.data.nextCursor)}
+                  disabled={!fleet.data.nextCursor}
+                >
+                  Next <ChevronRight aria-hidden className="size-4" />
+                </button>
+              </div>
+            </nav>
           </>
         )}
       </section>
     </>
   );
+}
+
+const statusKey = ['status'] as const;
+
+/** The trail keeps the cursors of the pages before this one but the first (which has none), so it is one short. */
+const pagesBefore = (p: { cursor: string | undefined; trail: string[] }) => (p.cursor ? p.trail.length + 1 : 0);
+
+/** "Boards 51–100 of 4,550": the pages before this one are full ones (the server's page size). */
+function pagePosition(data: RecapFleet, status: RecapStatus | undefined, pagesBefore: number) {
+  const total = status ? data.counts[status] : Object.values(data.counts).reduce((a, b) => a + b, 0) - data.counts['no-electrolytics'];
+  const first = pagesBefore * RECAP_FLEET_PAGE + 1;
+  const last = first + data.items.length - 1;
+  const n = new Intl.NumberFormat();
+  return `Boards ${n.format(first)}–${n.format(last)} of ${n.format(total)}`;
 }
 
 function FleetLine({ row }: { row: RecapFleetRow }) {
