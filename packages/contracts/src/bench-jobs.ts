@@ -226,11 +226,16 @@ export const benchJobPhoto = z.strictObject({
 });
 export type BenchJobPhoto = z.infer<typeof benchJobPhoto>;
 
-/** A value read on a part and judged against its window (also a diode or bridge judged as a set: no value). */
-export const benchReading = z.strictObject({
+/** The part and the step a judged result belongs to: every result of a finished job starts with these. */
+const judgedOnPart = {
   partId: uuid,
   designator: z.string(),
   stepKey: z.string(),
+};
+
+/** A value read on a part and judged against its window (also a diode or bridge judged as a set: no value). */
+export const benchReading = z.strictObject({
+  ...judgedOnPart,
   /** As typed: "570", "4.63k"; a diode set's readings joined: "forward 0.55 / reverse OL". */
   measuredText: z.string(),
   measured: z.number().nullable(),
@@ -249,9 +254,7 @@ export const benchReading = z.strictObject({
 export type BenchReading = z.infer<typeof benchReading>;
 
 export const benchFuseCheck = z.strictObject({
-  partId: uuid,
-  designator: z.string(),
-  stepKey: z.string(),
+  ...judgedOnPart,
   /** The marking on the parts list ("T2.5A 250V") and the one fitted. */
   specified: z.string(),
   fitted: z.string(),
@@ -261,9 +264,7 @@ export const benchFuseCheck = z.strictObject({
 export type BenchFuseCheck = z.infer<typeof benchFuseCheck>;
 
 export const benchPowerCheck = z.strictObject({
-  partId: uuid,
-  designator: z.string(),
-  stepKey: z.string(),
+  ...judgedOnPart,
   voltsText: z.string(),
   watts: z.number(),
   ratingWatts: z.number().nullable(),

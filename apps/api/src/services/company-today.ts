@@ -2,14 +2,13 @@
 // already tomorrow in UTC).
 import type { Tx } from '@bumperline/db/client';
 import { getCompanyLocale } from '@bumperline/db/queries/companies';
+import { epochDayFromParts, formatPlainDate } from '@bumperline/domain/plain-date';
 import { wallTimeAt } from '@bumperline/domain/schedules/zoned-time';
-
-const pad = (n: number) => String(n).padStart(2, '0');
 
 /** YYYY-MM-DD in `timeZone` at `now`. */
 export function dateInZone(timeZone: string, now: Date = new Date()): string {
   const wall = wallTimeAt(now.getTime(), timeZone);
-  return `${wall.year}-${pad(wall.month)}-${pad(wall.day)}`;
+  return formatPlainDate(epochDayFromParts(wall.year, wall.month, wall.day));
 }
 
 export async function companyToday(tx: Tx, tenantId: string, now: Date = new Date()): Promise<string> {

@@ -3,12 +3,11 @@
 // ways is not an error here — the API saves it and flags it for a person to settle.
 import { parseManufactureDate } from '@bumperline/domain/components/date-codes';
 import { isDomainError } from '@bumperline/domain/errors';
-
-const pad = (n: number) => String(n).padStart(2, '0');
+import { epochDayFromParts, formatPlainDate } from '@bumperline/domain/plain-date';
 
 /** Today on this device's calendar, YYYY-MM-DD. */
 export function localToday(now: Date = new Date()): string {
-  return `${now.getFullYear()}-${pad(now.getMonth() + 1)}-${pad(now.getDate())}`;
+  return formatPlainDate(epochDayFromParts(now.getFullYear(), now.getMonth() + 1, now.getDate()));
 }
 
 /** What is wrong with the date code as printed, or null when it can be saved (blank and two-way codes included). */
