@@ -1,8 +1,11 @@
 // A company with rows in every tenant-owned table: people of every role, a technician's profile, a venue
 // contact, an open invitation, settings, calls (one down, one assigned) with their timeline, downtime,
 // outbox messages and a photo, audit entries, and the bench: a board with its parts list, that board fitted in the
-// first game with its cabinet's temperatures, a template, a job on the board with a reading, a part used and a photo. Rows are arranged as the owner role or through the real
-// query and service functions inside the company's row-level-security scope.
+// first game with its cabinet's temperatures, a template, a job on the board with a reading, a part used and a photo;
+// care and stock: a care plan with an open work order, the game's plays meter and a reading, a catalogue part fitting
+// the board's fuse, a warehouse and a van with stock, a transfer and a part used, a keep-cost row, a route day and an
+// applied change. Rows are arranged as the owner role or through the real query and service functions inside the
+// company's row-level-security scope.
 import { randomBytes } from 'node:crypto';
 import { mkdtemp, rm } from 'node:fs/promises';
 import os from 'node:os';
@@ -26,6 +29,19 @@ import {
   modelBoards,
   partReadings,
   technicianProfiles,
+  appliedChanges,
+  carePlans,
+  catalogueParts,
+  gameMeters,
+  keepCostEntries,
+  meterReadings,
+  partFits,
+  partsUsed,
+  routeDays,
+  stockLevels,
+  stockLocations,
+  stockMovements,
+  workOrders,
 } from '@bumperline/db/schema/index';
 import { newToken } from '@bumperline/api/auth/tokens';
 import { preparePhoto, savePhoto } from '@bumperline/api/services/photo-intake';
@@ -55,6 +71,7 @@ export interface FullCompany extends CompanyFixture {
   /** A photo on the down call, stored in the given photo store. */
   photoId: string;
   bench: BenchRows;
+  care: CareRows;
 }
 
 /** The bench rows of a full company (arranged as the owner role). */
@@ -160,6 +177,120 @@ async function createBenchRows(db: TestDatabase, company: CompanyFixture, techni
   return { modelBoardId: boardId, resistorPartId, fusePartId, boardInstanceId, templateId: template!.id, benchJobId };
 }
 
+/** The care-plan, meter, stock and route-day rows of a full company (arranged as the owner role). */
+export interface CareRows {
+  /** A monthly plan ("last Tuesday") on the company's model, with a plays trigger, done by the technician. */
+  carePlanId: string;
+  /** Its open work order on the first game, planned into the technician's route day for 2026-12-03. */
+  workOrderId: string;
+  /** A fuse in the catalogue that fits F1 of the bench board. */
+  cataloguePartId: string;
+  warehouseId: string;
+  /** The technician's van: 4 of the fuse after one was used on the work order. */
+  vanId: string;
+}
+
+async function createCareRows(db: TestDatabase, company: CompanyFixture, technicianId: string, bench: BenchRows): Promise<CareRows> {
+  const { tenantId } = company;
+  const gameId = company.gameIds[0]!;
+  const [plan] = await db.owner
+    .insert(carePlans)
+    .values({
+      tenantId,
+      name: 'Monthly clean and check',
+      scope: 'model',
+      modelId: company.modelId,
+      tasks: ['Clean the playfield', 'Check the flipper coil stops'],
+      skills: ['pinball'],
+      onSiteMinutes: 45,
+      rule: 'FREQ=MONTHLY;BYDAY=TU;BYSETPOS=-1',
+      ruleStart: '2026-01-27T09:00',
+      playsEvery: 2000,
+      technicianId,
+    })
+    .returning({ id: carePlans.id });
+  const [order] = await db.owner
+    .insert(workOrders)
+    .values({
+      tenantId,
+      carePlanId: plan!.id,
+      gameId,
+      dueAt: new Date('2026-11-24T15:00:00Z'),
+      dueReason: 'calendar',
+      title: 'Monthly clean and check',
+      tasks: ['Clean the playfield', 'Check the flipper coil stops'],
+      skills: ['pinball'],
+      onSiteMinutes: 45,
+      technicianId,
+      plannedOn: '2026-12-03',
+    })
+    .returning({ id: workOrders.id });
+  await db.owner.insert(gameMeters).values({ tenantId, gameId, meter: 'plays', rollsOverAt: 1_000_000 });
+  await db.owner.insert(meterReadings).values({ tenantId, gameId, meter: 'plays', reading: 15_230, source: 'work_order', workOrderId: order!.id });
+  const [part] = await db.owner
+    .insert(catalogueParts)
+    .values({ tenantId, partNumber: 'F-T2.5A', description: 'Fuse T2.5A 250V 5×20 mm', kind: 'fuse', unitCostCents: 45, supplier: 'Parts house' })
+    .returning({ id: catalogueParts.id });
+  await db.owner.insert(partFits).values({ tenantId, cataloguePartId: part!.id, boardPartId: bench.fusePartId });
+  const [warehouse] = await db.owner
+    .insert(stockLocations)
+    .values({ tenantId, kind: 'warehouse', name: 'Shop shelves' })
+    .returning({ id: stockLocations.id });
+  const [van] = await db.owner
+    .insert(stockLocations)
+    .values({ tenantId, kind: 'van', name: 'Technician van', technicianId })
+    .returning({ id: stockLocations.id });
+  await db.owner.insert(stockLevels).values([
+    { tenantId, locationId: warehouse!.id, cataloguePartId: part!.id, quantity: 20, reorderPoint: 10, reorderQuantity: 50 },
+    { tenantId, locationId: van!.id, cataloguePartId: part!.id, quantity: 4, reorderPoint: 2, reorderQuantity: 5 },
+  ]);
+  await db.owner.insert(stockMovements).values({
+    tenantId,
+    cataloguePartId: part!.id,
+    reason: 'transfer',
+    fromLocationId: warehouse!.id,
+    toLocationId: van!.id,
+    quantity: 5,
+    unitCostCents: 45,
+  });
+  const [used] = await db.owner
+    .insert(stockMovements)
+    .values({ tenantId, cataloguePartId: part!.id, reason: 'used', fromLocationId: van!.id, quantity: 1, unitCostCents: 45, workOrderId: order!.id })
+    .returning({ id: stockMovements.id });
+  await db.owner.insert(partsUsed).values({
+    tenantId,
+    gameId,
+    workOrderId: order!.id,
+    cataloguePartId: part!.id,
+    locationId: van!.id,
+    quantity: 1,
+    unitCostCents: 45,
+    movementId: used!.id,
+  });
+  await db.owner.insert(keepCostEntries).values({
+    tenantId,
+    gameId,
+    source: 'bench_job',
+    sourceId: bench.benchJobId,
+    partsCents: 45,
+    labourMinutes: 90,
+    labourRateCents: 4500,
+    labourCents: 6750,
+    technicianId,
+  });
+  await db.owner.insert(routeDays).values({ tenantId, technicianId, day: '2026-12-03', stopOrder: [company.venueIds[0]!] });
+  await db.owner.insert(appliedChanges).values({
+    tenantId,
+    key: `fixture-${randomBytes(6).toString('hex')}`,
+    userId: technicianId,
+    method: 'POST',
+    path: `/api/work-orders/${order!.id}/done`,
+    status: 200,
+    body: { ok: true },
+  });
+  return { carePlanId: plan!.id, workOrderId: order!.id, cataloguePartId: part!.id, warehouseId: warehouse!.id, vanId: van!.id };
+}
+
 const randomPhone = () => `+1312555${String(1000 + (randomBytes(2).readUInt16BE() % 9000))}`;
 
 /** A small JPEG, made the way a phone's picture is taken in: through the real photo preparation. */
@@ -214,10 +345,12 @@ export async function createFullCompany(db: TestDatabase, name: string, photos: 
   );
 
   const bench = await createBenchRows(db, company, technician.id);
+  const care = await createCareRows(db, company, technician.id, bench);
 
   return {
     ...company,
     bench,
+    care,
     dispatcher: { id: dispatcher.id, email: dispatcher.email },
     technician: { id: technician.id, email: technician.email, phone },
     venueContact: { id: venueContact.id, email: venueContact.email },

@@ -39,6 +39,25 @@ export const permissions = {
   'bench:work': ['owner', 'dispatcher', 'technician'],
   /** Bench-job templates: their steps and cautions. */
   'bench-templates:write': ['owner', 'technician'],
+  /** Care plans and the work orders they create: everyone on staff reads them; the office writes plans. */
+  'care-plans:read': ['owner', 'dispatcher', 'technician'],
+  'care-plans:write': ['owner', 'dispatcher'],
+  /** Plan work orders: give them a technician and a day (the technician moves only the day of their own). */
+  'work-orders:plan': ['owner', 'dispatcher'],
+  /** Do, skip (with a reason) or move the day of a work order. */
+  'work-orders:work': ['owner', 'dispatcher', 'technician'],
+  /** Read and record meters (plays, power-on hours; collections read the money meters). */
+  'meters:write': ['owner', 'dispatcher', 'technician'],
+  /** Route days: a technician reads their own; the office reads every technician's. */
+  'route-days:read': ['owner', 'dispatcher', 'technician'],
+  /** Reorder a day's stops, move stops between technicians and days. */
+  'route-days:plan': ['owner', 'dispatcher'],
+  /** The parts catalogue, stocks and their movements. */
+  'stock:read': ['owner', 'dispatcher', 'technician'],
+  /** Catalogue entries, stock locations, reorder points, receiving from suppliers. */
+  'stock:manage': ['owner', 'dispatcher'],
+  /** Transfers and counts (a technician: to, from and of their own van); parts used on jobs. */
+  'stock:move': ['owner', 'dispatcher', 'technician'],
   'venue-view': ['venue_contact'],
 } as const satisfies Record<string, readonly Role[]>;
 

@@ -40,6 +40,24 @@ export const paths = {
   newBenchTemplate: () => '/bench/templates/new',
   /** A template's blank sheet for the bench (PDF from the API). */
   benchTemplateSheetPdf: (id: string) => `/api/bench-templates/${id}/sheet.pdf`,
+  /** Care plans (recurring preventive work) and the work orders they create. */
+  carePlans: '/care-plans',
+  newCarePlan: '/care-plans/new',
+  carePlan: (id: string) => `/care-plans/${id}`,
+  editCarePlan: (id: string) => `/care-plans/${id}/edit`,
+  workOrders: '/work-orders',
+  workOrder: (id: string) => `/work-orders/${id}`,
+  /** The technician's own day (their home screen); the office's every-technician view on a map. */
+  myDay: '/my-day',
+  myStop: (venueId: string) => `/my-day/stops/${venueId}`,
+  routeDays: '/route-days',
+  /** Parts catalogue, stocks, what to order; the technician's van. */
+  parts: '/parts',
+  part: (id: string) => `/parts/${id}`,
+  stock: '/stock',
+  stockLocation: (id: string) => `/stock/${id}`,
+  reorder: '/stock/reorder',
+  vanStock: '/van',
   settings: '/settings',
   team: '/team',
   activity: '/activity',

@@ -2,7 +2,7 @@
 // the technician types, its readings and parts used written when it is finished.
 import { sql } from 'drizzle-orm';
 import type { BenchJobDraft, BenchStep } from '@bumperline/contracts/bench-vocabulary';
-import { foreignKey, index, integer, jsonb, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import { date, foreignKey, index, integer, jsonb, text, timestamp, uuid } from 'drizzle-orm/pg-core';
 import { benchJobOrigin, benchJobState } from './enums.ts';
 import { users } from './identity.ts';
 import { serviceCalls } from './calls.ts';
@@ -35,6 +35,9 @@ export const benchJobs = tenantTable(
     steps: jsonb('steps').$type<BenchStep[]>().notNull(),
     origin: benchJobOrigin.column('origin').notNull(),
     serviceCallId: uuid('service_call_id'),
+    /** Who is to do it and on which day: it is then a stop on their route day at the game's venue. */
+    technicianId: uuid('technician_id').references(() => users.id, { onDelete: 'set null' }),
+    plannedOn: date('planned_on'),
     state: benchJobState.column('state').notNull().default('in_progress'),
     draft: jsonb('draft').$type<BenchJobDraft>().notNull(),
     /** Bumped by every save: a save from another device that did not see the latest is refused, not merged. */
@@ -53,6 +56,9 @@ export const benchJobs = tenantTable(
     benchJobOrigin.check('bench_jobs_origin_check', t.origin),
     index('bench_jobs_tenant_instance_idx').on(t.tenantId, t.boardInstanceId, t.openedAt),
     index('bench_jobs_tenant_state_idx').on(t.tenantId, t.state, t.openedAt, t.id),
+    index('bench_jobs_tenant_tech_day_idx')
+      .on(t.tenantId, t.technicianId, t.plannedOn, t.id)
+      .where(sql`state = 'in_progress' and technician_id is not null`),
     index('bench_jobs_tenant_call_idx')
       .on(t.tenantId, t.serviceCallId)
       .where(sql`service_call_id is not null`),
@@ -68,6 +74,8 @@ export const benchJobPartsUsed = tenantTable(
     partId: uuid('part_id'),
     description: text('description').notNull(),
     quantity: integer('quantity').notNull(),
+    /** The catalogue part fitted, when known: its stock comes off the finisher's van when the job is finished. */
+    cataloguePartId: uuid('catalogue_part_id'),
   },
   (t) => [
     foreignKey({ columns: [t.tenantId, t.jobId], foreignColumns: [benchJobs.tenantId, benchJobs.id] }).onDelete('cascade'),

@@ -1,7 +1,7 @@
 // Service calls and what hangs off them: their timeline, photos, and the game's downtime they cause.
 import { sql } from 'drizzle-orm';
 import { callStateGroups } from '@bumperline/contracts/calls';
-import { boolean, foreignKey, index, integer, jsonb, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
+import { boolean, date, foreignKey, index, integer, jsonb, text, timestamp, uniqueIndex, uuid } from 'drizzle-orm/pg-core';
 import { callSeverity, callSource, callState, problemKind } from './enums.ts';
 import { users } from './identity.ts';
 import { venues } from './venues.ts';
@@ -32,6 +32,8 @@ export const serviceCalls = tenantTable(
     statusToken: text('status_token').notNull(),
     openedAt: timestamp('opened_at', { withTimezone: true }).notNull().defaultNow(),
     targetAt: timestamp('target_at', { withTimezone: true }).notNull(),
+    /** The route day the call is planned into; an open call without one is on its technician's today. */
+    plannedOn: date('planned_on'),
     fixedAt: timestamp('fixed_at', { withTimezone: true }),
     closedAt: timestamp('closed_at', { withTimezone: true }),
     warnedAt: timestamp('warned_at', { withTimezone: true }),

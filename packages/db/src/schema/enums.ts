@@ -9,6 +9,8 @@ import { roles } from '@bumperline/contracts/roles';
 import { gameKinds, gameStatuses } from '@bumperline/contracts/games';
 import { callStates, problemKinds, severities } from '@bumperline/contracts/calls';
 import { benchJobOrigins, benchJobStates, partKinds, readingVerdicts } from '@bumperline/contracts/bench-vocabulary';
+import { carePlanScopes, dueReasons, meterKinds, meterReadingSources, workOrderStates } from '@bumperline/contracts/care-vocabulary';
+import { keepCostSources, stockLocationKinds, stockMovementReasons, stockUnits } from '@bumperline/contracts/stock-vocabulary';
 
 type Values = readonly [string, ...string[]];
 
@@ -41,3 +43,14 @@ export const partKind = valueSet(partKinds);
 export const benchJobState = valueSet(benchJobStates);
 export const benchJobOrigin = valueSet(benchJobOrigins);
 export const readingVerdict = valueSet(readingVerdicts);
+
+export const carePlanScope = valueSet(carePlanScopes);
+export const dueReason = valueSet(dueReasons);
+export const workOrderState = valueSet(workOrderStates);
+export const meterKind = valueSet(meterKinds);
+export const meterReadingSource = valueSet(meterReadingSources);
+
+export const stockLocationKind = valueSet(stockLocationKinds);
+export const stockUnit = valueSet(stockUnits);
+export const stockMovementReason = valueSet(stockMovementReasons);
+export const keepCostSource = valueSet(keepCostSources);

@@ -14,3 +14,8 @@ export * from './parts-lists.ts';
 export * from './boards.ts';
 export * from './bench-jobs.ts';
 export * from './part-readings.ts';
+export * from './meters.ts';
+export * from './care-plans.ts';
+export * from './stock.ts';
+export * from './keep-costs.ts';
+export * from './route-days.ts';

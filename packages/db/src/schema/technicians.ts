@@ -17,6 +17,9 @@ export const technicianProfiles = tenantTable(
     homeLatitude: doublePrecision('home_latitude'),
     homeLongitude: doublePrecision('home_longitude'),
     active: boolean('active').notNull().default(true),
+    /** The route day's hours, local "HH:MM": leave the start point, be back by. */
+    dayStart: text('day_start').notNull().default('08:00'),
+    dayEnd: text('day_end').notNull().default('17:00'),
   },
   () => [],
   { key: (t) => [t.userId] },
