@@ -45,6 +45,7 @@ CREATE TABLE "care_plans" (
 	"by_capacitor_life" boolean DEFAULT false NOT NULL,
 	"lead_days" integer DEFAULT 7 NOT NULL,
 	"technician_id" uuid,
+	"next_check_at" timestamp with time zone DEFAULT now() NOT NULL,
 	"version" integer DEFAULT 1 NOT NULL,
 	"created_at" timestamp with time zone DEFAULT now() NOT NULL,
 	"updated_at" timestamp with time zone DEFAULT now() NOT NULL,

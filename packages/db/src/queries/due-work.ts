@@ -20,3 +20,9 @@ export async function listCompaniesWithCallsToWarn(db: Db, p: { now: Date; longe
   );
   return r.rows.map((row) => row.tenant_id);
 }
+
+/** Companies with a care plan past its next check (drizzle/0013_…): the care-plan run works only in these. */
+export async function listCompaniesWithCarePlansToCheck(db: Db, p: { now: Date }): Promise<string[]> {
+  const r = await db.execute<{ tenant_id: string }>(sql`select tenant_id from care_plan_due_tenant_ids(${p.now})`);
+  return r.rows.map((row) => row.tenant_id);
+}

@@ -39,6 +39,11 @@ export const carePlans = tenantTable(
     leadDays: integer('lead_days').notNull().default(7),
     /** The usual technician; without one, work goes to the nearest technician with the skills. */
     technicianId: uuid('technician_id').references(() => users.id, { onDelete: 'set null' }),
+    /**
+     * The earliest moment one of its games may need a new work order (its next due date less the lead, or now when a
+     * meter reading, a finished job or an edit may have changed it). The scheduled run looks only at plans past it.
+     */
+    nextCheckAt: timestamp('next_check_at', { withTimezone: true }).notNull().defaultNow(),
     version: integer('version').notNull().default(1),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
     updatedAt: timestamp('updated_at', { withTimezone: true }).notNull().defaultNow(),
