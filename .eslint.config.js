@@ -22,7 +22,7 @@ const webNeverImports = {
   message: 'The web app reaches the database only through the API: import types from @bumperline/contracts.',
 };
 // Contracts files that import no zod, so the first screen may take values from them.
-const zodFreeContracts = ['roles', 'call-vocabulary', 'game-vocabulary', 'sign-in-refusals'];
+const zodFreeContracts = ['roles', 'call-vocabulary', 'game-vocabulary', 'sign-in-refusals', 'care-vocabulary', 'stock-vocabulary'];
 
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', 'test-results/**', 'drizzle/**', '**/*.tmp.ts'] },

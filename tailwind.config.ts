@@ -10,14 +10,18 @@ export default {
       fontFamily: {
         sans: ['"Nunito Sans Variable"', 'system-ui', 'sans-serif'],
       },
+      // The values live in CSS variables (apps/web/src/styles.css) so the dim theme for dark bars swaps them in one
+      // place; both themes' pairings are checked there.
       colors: {
-        ink: { DEFAULT: '#14213d', soft: '#334155', muted: '#475569' },
-        paper: { DEFAULT: '#ffffff', dim: '#f4f6fa', line: '#cbd2de' },
-        brass: { DEFAULT: '#8a5a00', light: '#fdf3d8', bright: '#d4a017' },
-        running: { DEFAULT: '#11643a', tint: '#e3f4ea' },
-        attention: { DEFAULT: '#8a4b00', tint: '#fff1dc' },
-        down: { DEFAULT: '#a3161a', tint: '#fde6e6' },
-        shop: { DEFAULT: '#2c4a9a', tint: '#e6ecfa' },
+        ink: { DEFAULT: 'var(--bl-ink)', soft: 'var(--bl-ink-soft)', muted: 'var(--bl-ink-muted)' },
+        paper: { DEFAULT: 'var(--bl-paper)', dim: 'var(--bl-paper-dim)', line: 'var(--bl-paper-line)' },
+        brass: { DEFAULT: 'var(--bl-brass)', light: 'var(--bl-brass-light)', bright: 'var(--bl-brass-bright)' },
+        running: { DEFAULT: 'var(--bl-running)', tint: 'var(--bl-running-tint)' },
+        attention: { DEFAULT: 'var(--bl-attention)', tint: 'var(--bl-attention-tint)' },
+        down: { DEFAULT: 'var(--bl-down)', tint: 'var(--bl-down-tint)' },
+        shop: { DEFAULT: 'var(--bl-shop)', tint: 'var(--bl-shop-tint)' },
+        /** The top and bottom bars: dark in both themes. */
+        bar: { DEFAULT: 'var(--bl-bar)', text: 'var(--bl-bar-text)' },
       },
     },
   },

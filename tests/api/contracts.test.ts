@@ -61,6 +61,31 @@ import {
 import { benchPhotoOnce, emptyBenchDraft, freshBenchJob, sendBenchPhoto } from '../support/bench-rows.ts';
 import { appWithFullCompany, type FullCompany } from '../support/full-company.ts';
 import { listRoutes } from '../support/route-list.ts';
+import { freshPlannedStop, freshRouteDay } from '../support/route-day-rows.ts';
+import { routeDay, routeDayBoard, stopMoved } from '@bumperline/contracts/route-days';
+import {
+  boardCatalogueFitList,
+  cataloguePage,
+  cataloguePart,
+  cataloguePartDetail,
+  partFitList,
+} from '@bumperline/contracts/parts-catalogue';
+import {
+  myVan,
+  reorderList,
+  stockChange,
+  stockLevel,
+  stockLevelPage,
+  stockLocation,
+  stockLocationList,
+  stockMovementPage,
+} from '@bumperline/contracts/stock';
+import { partUsed, partsUsedList } from '@bumperline/contracts/parts-used';
+import { freshWorkOrder } from '../support/stock-rows.ts';
+import { carePlan, carePlanDetail, carePlanPage } from '@bumperline/contracts/care-plans';
+import { workOrder, workOrderPage } from '@bumperline/contracts/work-orders';
+import { gameKeepCost, gameMeterList, latestMeterReadings, meterReading } from '@bumperline/contracts/meters';
+import { carePlans, workOrders } from '@bumperline/db/schema/index';
 
 type Caller = 'owner' | 'technician' | 'venue_contact' | 'signed-out';
 
@@ -484,6 +509,243 @@ const endpoints: Record<string, Endpoint> = {
     answer: 'pdf',
     probe: (a) => a.get(`/api/bench-templates/${company.bench.templateId}/sheet.pdf`).query({ boardId: company.bench.modelBoardId }),
   },
+  // Parts catalogue, stocks, parts used.
+  'GET /api/parts': { as: 'owner', status: 200, answer: cataloguePage, probe: (a) => a.get(`/api/parts?locationId=${company.care.vanId}`) },
+  'GET /api/parts/:id': {
+    as: 'owner',
+    status: 200,
+    answer: cataloguePartDetail,
+    probe: (a) => a.get(`/api/parts/${company.care.cataloguePartId}`),
+  },
+  'POST /api/parts': {
+    as: 'owner',
+    status: 201,
+    answer: cataloguePart,
+    probe: (a) =>
+      a
+        .post('/api/parts')
+        .set(JSON_HEADERS)
+        .send({ partNumber: unique('P'), description: 'Fuse F1A', kind: 'fuse', unitCostCents: 30 }),
+  },
+  'PATCH /api/parts/:id': {
+    as: 'owner',
+    status: 200,
+    answer: cataloguePart,
+    probe: async (a) => {
+      const { body } = await a
+        .post('/api/parts')
+        .set(JSON_HEADERS)
+        .send({ partNumber: unique('P'), description: 'Fuse', kind: 'fuse', unitCostCents: 30 });
+      return a.patch(`/api/parts/${body.id}`).set(JSON_HEADERS).send({ version: 1, unitCostCents: 35 });
+    },
+  },
+  'POST /api/parts/:id/retire': {
+    as: 'owner',
+    status: 200,
+    answer: cataloguePart,
+    probe: async (a) => {
+      const { body } = await a
+        .post('/api/parts')
+        .set(JSON_HEADERS)
+        .send({ partNumber: unique('P'), description: 'Old', kind: 'other', unitCostCents: 1 });
+      return a.post(`/api/parts/${body.id}/retire`).set(JSON_HEADERS);
+    },
+  },
+  'POST /api/parts/:id/fits': {
+    as: 'owner',
+    status: 201,
+    answer: partFitList,
+    probe: (a) =>
+      a.post(`/api/parts/${company.care.cataloguePartId}/fits`).set(JSON_HEADERS).send({ boardPartId: company.bench.resistorPartId }),
+  },
+  'DELETE /api/parts/:id/fits/:boardPartId': {
+    as: 'owner',
+    status: 200,
+    answer: partFitList,
+    probe: async (a) => {
+      await a.post(`/api/parts/${company.care.cataloguePartId}/fits`).set(JSON_HEADERS).send({ boardPartId: company.bench.resistorPartId });
+      return a.delete(`/api/parts/${company.care.cataloguePartId}/fits/${company.bench.resistorPartId}`).set(JSON_HEADERS);
+    },
+  },
+  'GET /api/boards/:boardId/catalogue-fits': {
+    as: 'technician',
+    status: 200,
+    answer: boardCatalogueFitList,
+    probe: (a) => a.get(`/api/boards/${company.bench.modelBoardId}/catalogue-fits`),
+  },
+  'GET /api/stock/locations': { as: 'owner', status: 200, answer: stockLocationList, probe: (a) => a.get('/api/stock/locations') },
+  'POST /api/stock/locations': {
+    as: 'owner',
+    status: 201,
+    answer: stockLocation,
+    probe: (a) =>
+      a
+        .post('/api/stock/locations')
+        .set(JSON_HEADERS)
+        .send({ kind: 'warehouse', name: unique('Shelves') }),
+  },
+  'GET /api/stock/locations/:id': {
+    as: 'owner',
+    status: 200,
+    answer: stockLocation,
+    probe: (a) => a.get(`/api/stock/locations/${company.care.vanId}`),
+  },
+  'PATCH /api/stock/locations/:id': {
+    as: 'owner',
+    status: 200,
+    answer: stockLocation,
+    probe: (a) => a.patch(`/api/stock/locations/${company.care.warehouseId}`).set(JSON_HEADERS).send({ name: 'Shop shelves' }),
+  },
+  'POST /api/stock/locations/:id/retire': {
+    as: 'owner',
+    status: 200,
+    answer: stockLocation,
+    probe: async (a) => {
+      const { body } = await a
+        .post('/api/stock/locations')
+        .set(JSON_HEADERS)
+        .send({ kind: 'warehouse', name: unique('Old') });
+      return a.post(`/api/stock/locations/${body.id}/retire`).set(JSON_HEADERS);
+    },
+  },
+  'GET /api/stock/locations/:id/levels': {
+    as: 'owner',
+    status: 200,
+    answer: stockLevelPage,
+    probe: (a) => a.get(`/api/stock/locations/${company.care.warehouseId}/levels`),
+  },
+  'PUT /api/stock/locations/:id/levels/:partId': {
+    as: 'owner',
+    status: 200,
+    answer: stockLevel,
+    probe: async (a) => {
+      const { body } = await a
+        .post('/api/parts')
+        .set(JSON_HEADERS)
+        .send({ partNumber: unique('P'), description: 'New', kind: 'fuse', unitCostCents: 5 });
+      return a
+        .put(`/api/stock/locations/${company.care.warehouseId}/levels/${body.id}`)
+        .set(JSON_HEADERS)
+        .send({ reorderPoint: 2, reorderQuantity: 10 });
+    },
+  },
+  'POST /api/stock/receive': {
+    as: 'owner',
+    status: 201,
+    answer: stockChange,
+    probe: (a) =>
+      a
+        .post('/api/stock/receive')
+        .set(JSON_HEADERS)
+        .send({ cataloguePartId: company.care.cataloguePartId, locationId: company.care.warehouseId, quantity: 10 }),
+  },
+  'POST /api/stock/transfer': {
+    as: 'technician',
+    status: 201,
+    answer: stockChange,
+    probe: (a) =>
+      a
+        .post('/api/stock/transfer')
+        .set(JSON_HEADERS)
+        .send({
+          cataloguePartId: company.care.cataloguePartId,
+          fromLocationId: company.care.warehouseId,
+          toLocationId: company.care.vanId,
+          quantity: 1,
+        }),
+  },
+  'POST /api/stock/count': {
+    as: 'technician',
+    status: 201,
+    answer: stockChange,
+    probe: (a) =>
+      a
+        .post('/api/stock/count')
+        .set(JSON_HEADERS)
+        .send({ cataloguePartId: company.care.cataloguePartId, locationId: company.care.vanId, countedQuantity: 5 }),
+  },
+  'GET /api/stock/movements': {
+    as: 'owner',
+    status: 200,
+    answer: stockMovementPage,
+    probe: (a) => a.get(`/api/stock/movements?cataloguePartId=${company.care.cataloguePartId}`),
+  },
+  'GET /api/stock/my-van': { as: 'technician', status: 200, answer: myVan, probe: (a) => a.get('/api/stock/my-van') },
+  'POST /api/stock/my-van': { as: 'owner', status: 200, answer: myVan, probe: (a) => a.post('/api/stock/my-van').set(JSON_HEADERS) },
+  'GET /api/stock/reorder': { as: 'owner', status: 200, answer: reorderList, probe: (a) => a.get('/api/stock/reorder') },
+  'GET /api/calls/:id/parts-used': {
+    as: 'owner',
+    status: 200,
+    answer: partsUsedList,
+    probe: (a) => a.get(`/api/calls/${company.assignedCallId}/parts-used`),
+  },
+  'POST /api/calls/:id/parts-used': {
+    as: 'technician',
+    status: 201,
+    answer: partUsed,
+    probe: (a) =>
+      a
+        .post(`/api/calls/${company.assignedCallId}/parts-used`)
+        .set(JSON_HEADERS)
+        .send({ cataloguePartId: company.care.cataloguePartId, quantity: 1 }),
+  },
+  'GET /api/work-orders/:id/parts-used': {
+    as: 'technician',
+    status: 200,
+    answer: partsUsedList,
+    probe: (a) => a.get(`/api/work-orders/${company.care.workOrderId}/parts-used`),
+  },
+  'POST /api/work-orders/:id/parts-used': {
+    as: 'owner',
+    status: 201,
+    answer: partUsed,
+    probe: async (a) =>
+      a
+        .post(`/api/work-orders/${await freshWorkOrder(t.db, company)}/parts-used`)
+        .set(JSON_HEADERS)
+        .send({ cataloguePartId: company.care.cataloguePartId, quantity: 1, locationId: company.care.warehouseId }),
+  },
+  // Route days (2026-12-03: the fixture's work order is planned into the technician's day).
+  'GET /api/route-days': { as: 'owner', status: 200, answer: routeDayBoard, probe: (a) => a.get('/api/route-days?day=2026-12-03') },
+  'GET /api/my-day': { as: 'technician', status: 200, answer: routeDay, probe: (a) => a.get('/api/my-day?day=2026-12-03') },
+  'GET /api/route-days/:technicianId/:day': {
+    as: 'owner',
+    status: 200,
+    answer: routeDay,
+    probe: (a) => a.get(`/api/route-days/${company.technician.id}/2026-12-03`),
+  },
+  'PUT /api/route-days/:technicianId/:day/order': {
+    as: 'owner',
+    status: 200,
+    answer: routeDay,
+    probe: async (a) => {
+      const day = freshRouteDay();
+      const { venueId } = await freshPlannedStop(t.db, company, day);
+      return a
+        .put(`/api/route-days/${company.technician.id}/${day}/order`)
+        .set(JSON_HEADERS)
+        .send({ venueIds: [venueId], version: 0 });
+    },
+  },
+  'POST /api/route-days/:technicianId/:day/reset-order': {
+    as: 'owner',
+    status: 200,
+    answer: routeDay,
+    probe: (a) => a.post(`/api/route-days/${company.technician.id}/${freshRouteDay()}/reset-order`).set(JSON_HEADERS).send({ version: 0 }),
+  },
+  'POST /api/route-days/:technicianId/:day/stops/:venueId/move': {
+    as: 'owner',
+    status: 200,
+    answer: stopMoved,
+    probe: async (a) => {
+      const day = freshRouteDay();
+      const { venueId } = await freshPlannedStop(t.db, company, day);
+      return a
+        .post(`/api/route-days/${company.technician.id}/${day}/stops/${venueId}/move`)
+        .set(JSON_HEADERS)
+        .send({ toTechnicianId: company.technician.id, toDay: freshRouteDay(), version: 0 });
+    },
+  },
   'GET /api/bench-jobs': { as: 'owner', status: 200, answer: benchJobPage, probe: (a) => a.get('/api/bench-jobs') },
   'POST /api/bench-jobs': {
     as: 'owner',
@@ -641,7 +903,192 @@ const endpoints: Record<string, Endpoint> = {
         .set(JSON_HEADERS)
         .send({ gameId: await addGame(t.db, company, 0), problem: 'no_credit' }),
   },
+
+  // Care plans, work orders, meters, keep cost.
+  'GET /api/care-plans': { as: 'owner', status: 200, answer: carePlanPage, probe: (a) => a.get('/api/care-plans') },
+  'POST /api/care-plans': {
+    as: 'owner',
+    status: 201,
+    answer: carePlan,
+    probe: (a) =>
+      a
+        .post('/api/care-plans')
+        .set(JSON_HEADERS)
+        .send(carePlanBody(unique('Plan'))),
+  },
+  'GET /api/care-plans/:id': {
+    as: 'owner',
+    status: 200,
+    answer: carePlanDetail,
+    probe: (a) => a.get(`/api/care-plans/${company.care.carePlanId}`),
+  },
+  'PUT /api/care-plans/:id': {
+    as: 'owner',
+    status: 200,
+    answer: carePlan,
+    probe: async (a) => {
+      const created = await a
+        .post('/api/care-plans')
+        .set(JSON_HEADERS)
+        .send(carePlanBody(unique('Plan')));
+      return a
+        .put(`/api/care-plans/${created.body.id}`)
+        .set(JSON_HEADERS)
+        .send({ ...carePlanBody(unique('Plan')), version: 1 });
+    },
+  },
+  'POST /api/care-plans/:id/retire': {
+    as: 'owner',
+    status: 200,
+    answer: carePlan,
+    probe: async (a) => {
+      const created = await a
+        .post('/api/care-plans')
+        .set(JSON_HEADERS)
+        .send(carePlanBody(unique('Plan')));
+      return a.post(`/api/care-plans/${created.body.id}/retire`).set(JSON_HEADERS).send({ version: 1 });
+    },
+  },
+  'GET /api/work-orders': {
+    as: 'technician',
+    status: 200,
+    answer: workOrderPage,
+    probe: (a) => a.get('/api/work-orders').query({ technicianId: 'me' }),
+  },
+  'GET /api/work-orders/:id': {
+    as: 'owner',
+    status: 200,
+    answer: workOrder,
+    probe: (a) => a.get(`/api/work-orders/${company.care.workOrderId}`),
+  },
+  'POST /api/work-orders/:id/move': {
+    as: 'owner',
+    status: 200,
+    answer: workOrder,
+    probe: async (a) =>
+      a
+        .post(`/api/work-orders/${await freshWorkOrder(t.db, company)}/move`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, plannedOn: '2099-01-04', technicianId: company.technician.id }),
+  },
+  'POST /api/work-orders/:id/skip': {
+    as: 'technician',
+    status: 200,
+    answer: workOrder,
+    probe: async (a) =>
+      a
+        .post(`/api/work-orders/${await freshWorkOrder(t.db, company)}/skip`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, reason: 'Venue closed' }),
+  },
+  'POST /api/work-orders/:id/done': {
+    as: 'technician',
+    status: 200,
+    answer: workOrder,
+    probe: async (a) =>
+      a
+        .post(`/api/work-orders/${await freshWorkOrder(t.db, company)}/done`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, labourMinutes: 40, note: 'All good', readings: [{ meter: 'plays', reading: 999_000 }] }),
+  },
+  'POST /api/work-orders/:id/bench-job': {
+    as: 'technician',
+    status: 200,
+    answer: workOrder,
+    probe: async (a) =>
+      a
+        .post(`/api/work-orders/${await freshBenchWorkOrder()}/bench-job`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, boardInstanceId: company.bench.boardInstanceId }),
+  },
+  'GET /api/games/:id/meters': {
+    as: 'owner',
+    status: 200,
+    answer: gameMeterList,
+    probe: (a) => a.get(`/api/games/${company.gameIds[0]}/meters`),
+  },
+  'PUT /api/games/:id/meters': {
+    as: 'owner',
+    status: 200,
+    answer: gameMeterList,
+    probe: (a) =>
+      a
+        .put(`/api/games/${company.gameIds[0]}/meters`)
+        .set(JSON_HEADERS)
+        .send({
+          items: [
+            { meter: 'plays', rollsOverAt: 1_000_000 },
+            { meter: 'hours', rollsOverAt: null },
+          ],
+        }),
+  },
+  'POST /api/games/:id/meter-readings': {
+    as: 'technician',
+    status: 201,
+    answer: meterReading,
+    probe: async (a) =>
+      a
+        .post(`/api/games/${await addGame(t.db, company, 0)}/meter-readings`)
+        .set(JSON_HEADERS)
+        .send({ meter: 'plays', reading: 4321 }),
+  },
+  'GET /api/games/:id/meter-readings/latest': {
+    as: 'owner',
+    status: 200,
+    answer: latestMeterReadings,
+    probe: (a) => a.get(`/api/games/${company.gameIds[0]}/meter-readings/latest`),
+  },
+  'GET /api/games/:id/keep-cost': {
+    as: 'owner',
+    status: 200,
+    answer: gameKeepCost,
+    probe: (a) => a.get(`/api/games/${company.gameIds[0]}/keep-cost`),
+  },
 };
+
+/** A care plan's whole body, as the editor sends it. */
+function carePlanBody(name: string) {
+  return {
+    name,
+    scope: 'model',
+    modelId: company.modelId,
+    tasks: ['Clean the playfield'],
+    onSiteMinutes: 45,
+    rule: 'FREQ=MONTHLY;BYDAY=TU;BYSETPOS=-1',
+    ruleStart: '2027-01-26T09:00',
+    technicianId: company.technician.id,
+  };
+}
+
+/** An open work order whose plan names the bench-job template, on the game with the fixture's board. */
+async function freshBenchWorkOrder(): Promise<string> {
+  const [plan] = await t.db.owner
+    .insert(carePlans)
+    .values({
+      tenantId: company.tenantId,
+      name: unique('Recap plan'),
+      scope: 'game',
+      gameId: company.gameIds[0]!,
+      benchTemplateId: company.bench.templateId,
+      onSiteMinutes: 120,
+      byCapacitorLife: true,
+    })
+    .returning({ id: carePlans.id });
+  const [order] = await t.db.owner
+    .insert(workOrders)
+    .values({
+      tenantId: company.tenantId,
+      carePlanId: plan!.id,
+      gameId: company.gameIds[0]!,
+      dueAt: new Date(),
+      dueReason: 'capacitor_life',
+      title: 'Recap',
+      benchTemplateId: company.bench.templateId,
+      onSiteMinutes: 120,
+    })
+    .returning({ id: workOrders.id });
+  return order!.id;
+}
 
 /** What is wrong with the answer, or 'as agreed'. */
 function check(res: Response, e: Endpoint): string {

@@ -6,8 +6,12 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { sql } from 'drizzle-orm';
 import { callStateGroups, callStates, type CallState } from '@bumperline/contracts/calls';
 import { longestWarningLeadMinutes } from '@bumperline/contracts/settings';
-import { listCompaniesWithCallsToWarn, listCompaniesWithDueMessages } from '@bumperline/db/queries/due-work';
-import { outbox, serviceCalls, tenantSettings } from '@bumperline/db/schema/index';
+import {
+  listCompaniesWithCallsToWarn,
+  listCompaniesWithCarePlansToCheck,
+  listCompaniesWithDueMessages,
+} from '@bumperline/db/queries/due-work';
+import { carePlans, outbox, serviceCalls, tenantSettings } from '@bumperline/db/schema/index';
 import { freshDatabase, type TestDatabase } from '../support/database.ts';
 import { createCompany, type CompanyFixture } from '../support/factories.ts';
 
@@ -127,6 +131,34 @@ describe('what the app role reaches through them', () => {
   });
 });
 
+describe('companies with care plans to check', () => {
+  async function companyWithPlan(name: string, plan: { nextCheckAt: Date; retiredAt?: Date }): Promise<CompanyFixture> {
+    const company = await createCompany(db.owner, name, 1);
+    await db.owner.insert(carePlans).values({
+      tenantId: company.tenantId,
+      name: `${name} monthly`,
+      scope: 'model',
+      modelId: company.modelId,
+      tasks: ['Clean the playfield'],
+      onSiteMinutes: 30,
+      playsEvery: 1000,
+      nextCheckAt: plan.nextCheckAt,
+      retiredAt: plan.retiredAt ?? null,
+    });
+    return company;
+  }
+
+  it('are those with an active plan past its next check, and no others', async () => {
+    const due = await companyWithPlan('Plan Due', { nextCheckAt: at(-5) });
+    const justDue = await companyWithPlan('Plan Due Now', { nextCheckAt: NOW });
+    await companyWithPlan('Plan Later', { nextCheckAt: at(30) });
+    await companyWithPlan('Plan Retired', { nextCheckAt: at(-60), retiredAt: at(-30) });
+    await createCompany(db.owner, 'No Plans', 1);
+    // No other test of this file has made a care plan by now: exactly these two.
+    expect(sorted(await listCompaniesWithCarePlansToCheck(db.app, { now: NOW }))).toEqual(sorted([due.tenantId, justDue.tenantId]));
+  });
+});
+
 describe('the plan', () => {
   interface PlanNode {
     'Node Type': string;
@@ -163,13 +195,13 @@ describe('the plan', () => {
    * The function's own body, with its parameters as $1, $2, planned generically (the worst case), explained
    * (with `analyze`, also run) for these arguments: what it reads.
    */
-  async function scansOf(name: string, args: string[], values: string[], analyze = false): Promise<Scan[]> {
+  async function scansOf(name: string, args: string[], values: string[], analyze = false, generic = true): Promise<Scan[]> {
     const fn = await db.owner.execute<{ src: string; types: string }>(
       sql`select prosrc as src, oidvectortypes(proargtypes) as types from pg_proc where proname = ${name}`,
     );
     const src = args.reduce((s, arg, i) => s.replace(new RegExp(`\\b${arg}\\b`, 'g'), `$${i + 1}`), fn.rows[0]!.src);
     return db.owner.transaction(async (tx) => {
-      await tx.execute(sql`set local plan_cache_mode = force_generic_plan`);
+      await tx.execute(generic ? sql`set local plan_cache_mode = force_generic_plan` : sql`set local plan_cache_mode = force_custom_plan`);
       await tx.execute(sql.raw(`prepare due_work_plan(${fn.rows[0]!.types}) as ${src}`));
       const explained = await tx.execute<{ 'QUERY PLAN': [{ Plan: PlanNode }] }>(
         sql.raw(`explain (${analyze ? 'analyze, ' : ''}format json) execute due_work_plan(${values.join(', ')})`),
@@ -206,6 +238,20 @@ describe('the plan', () => {
     const found = await scansOf('outbox_due_tenant_ids', ['p_now', 'p_stuck_before'], ['now()', "now() - interval '2 minutes'"]);
     expect(found).toEqual([
       { scan: expect.stringMatching(/^(Index|Index Only) Scan outbox using outbox_claimable_idx$/), perRowFound: false },
+    ]);
+  });
+
+  it('finds care plans to check through the partial next-check index, never by scanning every plan', async () => {
+    await db.owner.execute(sql`
+      insert into care_plans (tenant_id, name, scope, model_id, tasks, on_site_minutes, plays_every, next_check_at)
+      select m.tenant_id, 'Old plan ' || i, 'model', m.id, '["Clean"]'::jsonb, 30, 1000, now() + i * interval '1 day'
+      from game_models m, generate_series(1, 20) i`);
+    await db.owner.execute(sql`analyze care_plans`);
+    // Planned for the moment it is called with: a generic plan guesses a third of all plans past any moment, while
+    // the statistics know that almost every plan's next check lies ahead.
+    const found = await scansOf('care_plan_due_tenant_ids', ['p_now'], ['now()'], false, false);
+    expect(found).toEqual([
+      { scan: expect.stringMatching(/^(Index|Index Only) Scan care_plans using care_plans_next_check_idx$/), perRowFound: false },
     ]);
   });
 

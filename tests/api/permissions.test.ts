@@ -22,6 +22,9 @@ import {
 import { benchPhotoOnce, emptyBenchDraft, freshBenchJob, sendBenchPhoto } from '../support/bench-rows.ts';
 import { appWithFullCompany, type FullCompany } from '../support/full-company.ts';
 import { listRoutes, type ListedRoute } from '../support/route-list.ts';
+import { freshPlannedStop, freshRouteDay } from '../support/route-day-rows.ts';
+import { freshWorkOrder } from '../support/stock-rows.ts';
+import { carePlans } from '@bumperline/db/schema/index';
 
 /** Who may do what, as agreed; the app's own table (packages/contracts/src/roles.ts) must equal it. */
 const whoMay: Record<Permission, readonly Role[]> = {
@@ -47,6 +50,16 @@ const whoMay: Record<Permission, readonly Role[]> = {
   'bench:work': ['owner', 'dispatcher', 'technician'],
   'bench-templates:write': ['owner', 'technician'],
   'venue-view': ['venue_contact'],
+  'route-days:read': ['owner', 'dispatcher', 'technician'],
+  'route-days:plan': ['owner', 'dispatcher'],
+  'stock:read': ['owner', 'dispatcher', 'technician'],
+  'stock:manage': ['owner', 'dispatcher'],
+  'stock:move': ['owner', 'dispatcher', 'technician'],
+  'care-plans:read': ['owner', 'dispatcher', 'technician'],
+  'care-plans:write': ['owner', 'dispatcher'],
+  'work-orders:plan': ['owner', 'dispatcher'],
+  'work-orders:work': ['owner', 'dispatcher', 'technician'],
+  'meters:write': ['owner', 'dispatcher', 'technician'],
 };
 
 /**
@@ -168,6 +181,8 @@ const routes: Record<string, RouteCase> = {
     ok: 400,
     probe: (c) => c.agent.post('/dev/phone/reply').type('form').send({ from: 'nobody', body: 'hi' }),
   },
+  'GET /dev/care-plans': { access: 'dev-only', ok: 200, probe: (c) => c.agent.get('/dev/care-plans') },
+  'POST /dev/care-plans/run': { access: 'dev-only', ok: 400, probe: (c) => c.agent.post('/dev/care-plans/run').send({}) },
 
   // Any signed-in person.
   'GET /api/account/me': { access: 'signed-in', ok: 200, probe: (c) => c.agent.get('/api/account/me') },
@@ -500,6 +515,228 @@ const routes: Record<string, RouteCase> = {
     probe: (c) => c.agent.get(`/api/bench-jobs/${company.bench.benchJobId}/sheet.pdf`),
   },
 
+  // Parts catalogue, stocks, parts used.
+  'GET /api/parts': { access: 'stock:read', ok: 200, probe: (c) => c.agent.get('/api/parts') },
+  'GET /api/parts/:id': { access: 'stock:read', ok: 200, probe: (c) => c.agent.get(`/api/parts/${company.care.cataloguePartId}`) },
+  'POST /api/parts': {
+    access: 'stock:manage',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post('/api/parts')
+        .set(JSON_HEADERS)
+        .send({ partNumber: unique('P'), description: 'Probe fuse', kind: 'fuse', unitCostCents: 10 }),
+  },
+  'PATCH /api/parts/:id': {
+    access: 'stock:manage',
+    ok: 200,
+    probe: async (c) => {
+      const { body } = await agents.owner.get(`/api/parts/${company.care.cataloguePartId}`);
+      return c.agent
+        .patch(`/api/parts/${company.care.cataloguePartId}`)
+        .set(JSON_HEADERS)
+        .send({ version: body.part.version, notes: unique('n') });
+    },
+  },
+  'POST /api/parts/:id/retire': {
+    access: 'stock:manage',
+    ok: 200,
+    probe: async (c) => {
+      const { body } = await agents.owner
+        .post('/api/parts')
+        .set(JSON_HEADERS)
+        .send({ partNumber: unique('R'), description: 'To retire', kind: 'other', unitCostCents: 1 });
+      return c.agent.post(`/api/parts/${body.id}/retire`).set(JSON_HEADERS);
+    },
+  },
+  'POST /api/parts/:id/fits': {
+    access: 'stock:manage',
+    ok: 201,
+    probe: (c) =>
+      c.agent.post(`/api/parts/${company.care.cataloguePartId}/fits`).set(JSON_HEADERS).send({ boardPartId: company.bench.resistorPartId }),
+  },
+  'DELETE /api/parts/:id/fits/:boardPartId': {
+    access: 'stock:manage',
+    ok: 200,
+    probe: async (c) => {
+      await agents.owner
+        .post(`/api/parts/${company.care.cataloguePartId}/fits`)
+        .set(JSON_HEADERS)
+        .send({ boardPartId: company.bench.resistorPartId });
+      return c.agent.delete(`/api/parts/${company.care.cataloguePartId}/fits/${company.bench.resistorPartId}`).set(JSON_HEADERS);
+    },
+  },
+  'GET /api/boards/:boardId/catalogue-fits': {
+    access: 'stock:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/boards/${company.bench.modelBoardId}/catalogue-fits`),
+  },
+  'GET /api/stock/locations': { access: 'stock:read', ok: 200, probe: (c) => c.agent.get('/api/stock/locations') },
+  'POST /api/stock/locations': {
+    access: 'stock:manage',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post('/api/stock/locations')
+        .set(JSON_HEADERS)
+        .send({ kind: 'warehouse', name: unique('Shelves') }),
+  },
+  'GET /api/stock/locations/:id': {
+    access: 'stock:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/stock/locations/${company.care.warehouseId}`),
+  },
+  'PATCH /api/stock/locations/:id': {
+    access: 'stock:manage',
+    ok: 200,
+    probe: (c) => c.agent.patch(`/api/stock/locations/${company.care.warehouseId}`).set(JSON_HEADERS).send({ name: 'Shop shelves' }),
+  },
+  'POST /api/stock/locations/:id/retire': {
+    access: 'stock:manage',
+    ok: 200,
+    probe: async (c) => {
+      const { body } = await agents.owner
+        .post('/api/stock/locations')
+        .set(JSON_HEADERS)
+        .send({ kind: 'warehouse', name: unique('Old shelves') });
+      return c.agent.post(`/api/stock/locations/${body.id}/retire`).set(JSON_HEADERS);
+    },
+  },
+  'GET /api/stock/locations/:id/levels': {
+    access: 'stock:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/stock/locations/${company.care.warehouseId}/levels`),
+  },
+  'PUT /api/stock/locations/:id/levels/:partId': {
+    access: 'stock:manage',
+    ok: 200,
+    probe: async (c) => {
+      const { body } = await agents.owner.get(`/api/parts/${company.care.cataloguePartId}`);
+      const level = body.holdings.find((h: { locationId: string }) => h.locationId === company.care.warehouseId);
+      return c.agent
+        .put(`/api/stock/locations/${company.care.warehouseId}/levels/${company.care.cataloguePartId}`)
+        .set(JSON_HEADERS)
+        .send({ reorderPoint: 10, reorderQuantity: 50, version: level.version });
+    },
+  },
+  'POST /api/stock/receive': {
+    access: 'stock:manage',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post('/api/stock/receive')
+        .set(JSON_HEADERS)
+        .send({ cataloguePartId: company.care.cataloguePartId, locationId: company.care.warehouseId, quantity: 1 }),
+  },
+  'POST /api/stock/transfer': {
+    access: 'stock:move',
+    ok: 201,
+    // Warehouse → the technician's van: the one move every role with the permission may make.
+    probe: (c) =>
+      c.agent
+        .post('/api/stock/transfer')
+        .set(JSON_HEADERS)
+        .send({
+          cataloguePartId: company.care.cataloguePartId,
+          fromLocationId: company.care.warehouseId,
+          toLocationId: company.care.vanId,
+          quantity: 1,
+        }),
+  },
+  'POST /api/stock/count': {
+    access: 'stock:move',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post('/api/stock/count')
+        .set(JSON_HEADERS)
+        .send({ cataloguePartId: company.care.cataloguePartId, locationId: company.care.vanId, countedQuantity: 4 }),
+  },
+  'GET /api/stock/movements': {
+    access: 'stock:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/stock/movements?locationId=${company.care.vanId}`),
+  },
+  'GET /api/stock/my-van': { access: 'stock:read', ok: 200, probe: (c) => c.agent.get('/api/stock/my-van') },
+  'POST /api/stock/my-van': { access: 'stock:move', ok: 200, probe: (c) => c.agent.post('/api/stock/my-van').set(JSON_HEADERS) },
+  'GET /api/stock/reorder': { access: 'stock:manage', ok: 200, probe: (c) => c.agent.get('/api/stock/reorder') },
+  'GET /api/calls/:id/parts-used': {
+    access: 'stock:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/calls/${company.assignedCallId}/parts-used`),
+  },
+  'POST /api/calls/:id/parts-used': {
+    access: 'stock:move',
+    ok: 201,
+    // The technician takes it off their van; the office names the warehouse.
+    probe: async (c) =>
+      c.agent
+        .post(`/api/calls/${await freshCall(t.db, company)}/parts-used`)
+        .set(JSON_HEADERS)
+        .send({
+          cataloguePartId: company.care.cataloguePartId,
+          quantity: 1,
+          ...(c.who === 'technician' ? {} : { locationId: company.care.warehouseId }),
+        }),
+  },
+  'GET /api/work-orders/:id/parts-used': {
+    access: 'stock:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/work-orders/${company.care.workOrderId}/parts-used`),
+  },
+  'POST /api/work-orders/:id/parts-used': {
+    access: 'stock:move',
+    ok: 201,
+    probe: async (c) =>
+      c.agent
+        .post(`/api/work-orders/${await freshWorkOrder(t.db, company)}/parts-used`)
+        .set(JSON_HEADERS)
+        .send({
+          cataloguePartId: company.care.cataloguePartId,
+          quantity: 1,
+          ...(c.who === 'technician' ? {} : { locationId: company.care.warehouseId }),
+        }),
+  },
+
+  // Route days.
+  'GET /api/route-days': { access: 'route-days:read', ok: 200, probe: (c) => c.agent.get('/api/route-days') },
+  'GET /api/my-day': {
+    access: 'route-days:read',
+    ok: 200,
+    // Only a technician has a day of their own.
+    handler: { owner: 404, dispatcher: 404 },
+    probe: (c) => c.agent.get('/api/my-day'),
+  },
+  'GET /api/route-days/:technicianId/:day': {
+    access: 'route-days:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/route-days/${company.technician.id}/2026-12-03`),
+  },
+  'PUT /api/route-days/:technicianId/:day/order': {
+    access: 'route-days:plan',
+    ok: 200,
+    probe: (c) =>
+      c.agent.put(`/api/route-days/${company.technician.id}/${freshRouteDay()}/order`).set(JSON_HEADERS).send({ venueIds: [], version: 0 }),
+  },
+  'POST /api/route-days/:technicianId/:day/reset-order': {
+    access: 'route-days:plan',
+    ok: 200,
+    probe: (c) =>
+      c.agent.post(`/api/route-days/${company.technician.id}/${freshRouteDay()}/reset-order`).set(JSON_HEADERS).send({ version: 0 }),
+  },
+  'POST /api/route-days/:technicianId/:day/stops/:venueId/move': {
+    access: 'route-days:plan',
+    ok: 200,
+    probe: async (c) => {
+      const day = freshRouteDay();
+      const { venueId } = await freshPlannedStop(t.db, company, day);
+      return c.agent
+        .post(`/api/route-days/${company.technician.id}/${day}/stops/${venueId}/move`)
+        .set(JSON_HEADERS)
+        .send({ toTechnicianId: company.technician.id, toDay: freshRouteDay(), version: 0 });
+    },
+  },
+
   // Service calls.
   'GET /api/calls': { access: 'calls:read', ok: 200, probe: (c) => c.agent.get('/api/calls') },
   'POST /api/calls': {
@@ -578,7 +815,145 @@ const routes: Record<string, RouteCase> = {
         .set(JSON_HEADERS)
         .send({ gameId: await addGame(t.db, company, 0), problem: 'no_credit' }),
   },
+
+  // Care plans, work orders, meters and keep cost.
+  'GET /api/care-plans': { access: 'care-plans:read', ok: 200, probe: (c) => c.agent.get('/api/care-plans') },
+  'POST /api/care-plans': {
+    access: 'care-plans:write',
+    ok: 201,
+    probe: (c) =>
+      c.agent
+        .post('/api/care-plans')
+        .set(JSON_HEADERS)
+        .send(planBody(unique('Plan'))),
+  },
+  'GET /api/care-plans/:id': {
+    access: 'care-plans:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/care-plans/${company.care.carePlanId}`),
+  },
+  'PUT /api/care-plans/:id': {
+    access: 'care-plans:write',
+    ok: 200,
+    probe: async (c) =>
+      c.agent
+        .put(`/api/care-plans/${await freshCarePlan()}`)
+        .set(JSON_HEADERS)
+        .send({ ...planBody(unique('Plan')), version: 1 }),
+  },
+  'POST /api/care-plans/:id/retire': {
+    access: 'care-plans:write',
+    ok: 200,
+    probe: async (c) =>
+      c.agent
+        .post(`/api/care-plans/${await freshCarePlan()}/retire`)
+        .set(JSON_HEADERS)
+        .send({ version: 1 }),
+  },
+  'GET /api/work-orders': { access: 'care-plans:read', ok: 200, probe: (c) => c.agent.get('/api/work-orders') },
+  'GET /api/work-orders/:id': {
+    access: 'care-plans:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/work-orders/${company.care.workOrderId}`),
+  },
+  'POST /api/work-orders/:id/move': {
+    access: 'work-orders:work',
+    ok: 200,
+    probe: async (c) =>
+      c.agent
+        .post(`/api/work-orders/${await freshWorkOrder(t.db, company)}/move`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, plannedOn: '2099-01-04' }),
+  },
+  'POST /api/work-orders/:id/skip': {
+    access: 'work-orders:work',
+    ok: 200,
+    probe: async (c) =>
+      c.agent
+        .post(`/api/work-orders/${await freshWorkOrder(t.db, company)}/skip`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, reason: 'Venue closed' }),
+  },
+  'POST /api/work-orders/:id/done': {
+    access: 'work-orders:work',
+    ok: 200,
+    probe: async (c) =>
+      c.agent
+        .post(`/api/work-orders/${await freshWorkOrder(t.db, company)}/done`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, labourMinutes: 30 }),
+  },
+  // The fixture's plan has a task list, not a bench-job template: the workflow answers 409.
+  'POST /api/work-orders/:id/bench-job': {
+    access: 'bench:work',
+    ok: 409,
+    probe: async (c) =>
+      c.agent
+        .post(`/api/work-orders/${await freshWorkOrder(t.db, company)}/bench-job`)
+        .set(JSON_HEADERS)
+        .send({ version: 1, boardInstanceId: company.bench.boardInstanceId }),
+  },
+  'GET /api/games/:id/meters': { access: 'games:read', ok: 200, probe: (c) => c.agent.get(`/api/games/${company.gameIds[0]}/meters`) },
+  'PUT /api/games/:id/meters': {
+    access: 'games:write',
+    ok: 200,
+    probe: (c) =>
+      c.agent
+        .put(`/api/games/${company.gameIds[0]}/meters`)
+        .set(JSON_HEADERS)
+        .send({ items: [{ meter: 'plays', rollsOverAt: 1_000_000 }] }),
+  },
+  'POST /api/games/:id/meter-readings': {
+    access: 'meters:write',
+    ok: 201,
+    // A new game each time, so each reading is its first.
+    probe: async (c) =>
+      c.agent
+        .post(`/api/games/${await addGame(t.db, company, 0)}/meter-readings`)
+        .set(JSON_HEADERS)
+        .send({ meter: 'plays', reading: 1200 }),
+  },
+  'GET /api/games/:id/meter-readings/latest': {
+    access: 'games:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/games/${company.gameIds[0]}/meter-readings/latest`),
+  },
+  'GET /api/games/:id/keep-cost': {
+    access: 'games:read',
+    ok: 200,
+    probe: (c) => c.agent.get(`/api/games/${company.gameIds[0]}/keep-cost`),
+  },
 };
+
+/** A care plan's whole body, as the editor sends it. */
+function planBody(name: string) {
+  return {
+    name,
+    scope: 'model',
+    modelId: company.modelId,
+    tasks: ['Clean the playfield'],
+    onSiteMinutes: 45,
+    rule: 'FREQ=MONTHLY;BYDAY=TU;BYSETPOS=-1',
+    ruleStart: '2027-01-26T09:00',
+  };
+}
+
+/** A new care plan at version 1 (arranged as the owner role). */
+async function freshCarePlan(): Promise<string> {
+  const [plan] = await t.db.owner
+    .insert(carePlans)
+    .values({
+      tenantId: company.tenantId,
+      name: unique('Plan'),
+      scope: 'model',
+      modelId: company.modelId,
+      tasks: ['Clean'],
+      onSiteMinutes: 30,
+      playsEvery: 1000,
+    })
+    .returning({ id: carePlans.id });
+  return plan!.id;
+}
 
 /** The status, or what else a 401/403/404 was when it is not the plain answer of a guard or a handler. */
 function answer(res: Response): number | string {

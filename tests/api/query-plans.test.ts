@@ -29,6 +29,9 @@ const agents: Partial<Record<'owner' | 'dispatcher' | 'technician', Agent>> = {}
 let sample: { callId: string; gameId: string; venueId: string };
 /** The bench's heaviest rows at the largest company: its 400-part board, the board with the most readings, the job with the most. */
 let bench: { modelId: string; boardId: string; instanceId: string; gameId: string; jobId: string; openJobId: string; templateId: string };
+/** Stock rows at the largest company (see beforeAll). */
+let stock: { partId: string; warehouseId: string; vanId: string; workOrderId: string };
+let carePlanId: string;
 let companyTables: Set<string>;
 /** 4 pages of 8 kB. */
 const FEW_PAGES = 4;
@@ -82,6 +85,29 @@ beforeAll(async () => {
   const template = await one<{ id: string }>(
     sql`select id from bench_templates where tenant_id = ${largest.tenantId} order by name, id limit 1`,
   );
+  // Stock at the largest company: the part that moved most, the shop's shelves, the test technician's van, and a
+  // work order with parts used.
+  const movedMost = await one<{ id: string }>(
+    sql`select catalogue_part_id as id from stock_movements where tenant_id = ${largest.tenantId}
+        group by catalogue_part_id order by count(*) desc, catalogue_part_id limit 1`,
+  );
+  const warehouse = await one<{ id: string }>(
+    sql`select id from stock_locations where tenant_id = ${largest.tenantId} and kind = 'warehouse' order by name, id limit 1`,
+  );
+  const van = await one<{ id: string } | undefined>(
+    sql`select id from stock_locations where tenant_id = ${largest.tenantId} and technician_id = ${largest.people.technician.id}`,
+  );
+  const usedOn = await one<{ id: string }>(
+    sql`select work_order_id as id from parts_used where tenant_id = ${largest.tenantId} and work_order_id is not null
+        order by used_at desc limit 1`,
+  );
+  stock = { partId: movedMost.id, warehouseId: warehouse.id, vanId: van?.id ?? warehouse.id, workOrderId: usedOn.id };
+  // The largest company's care plan covering the most games.
+  const plan = await one<{ id: string }>(
+    sql`select p.id from care_plans p join games g on g.tenant_id = p.tenant_id and g.model_id = p.model_id
+        where p.tenant_id = ${largest.tenantId} and p.retired_at is null group by p.id order by count(*) desc, p.id limit 1`,
+  );
+  carePlanId = plan.id;
   bench = {
     modelId: board.model_id,
     boardId: board.id,
@@ -192,6 +218,38 @@ describe('query plans at scale, as the app role under row-level security', () =>
     ['technician', '/api/bench-jobs/:openJob'],
     ['technician', '/api/bench-templates'],
     ['technician', '/api/bench-templates/:template'],
+    ['owner', '/api/parts'],
+    ['owner', '/api/parts?q=fuse'],
+    ['owner', '/api/parts?kind=fuse&order=desc'],
+    ['owner', '/api/parts?sort=description'],
+    ['technician', '/api/parts?locationId=:van&inStockAt=:van'],
+    ['owner', '/api/parts/:part'],
+    ['owner', '/api/stock/locations'],
+    ['owner', '/api/stock/locations/:warehouse/levels'],
+    ['owner', '/api/stock/locations/:warehouse/levels?low=true'],
+    ['owner', '/api/stock/movements?locationId=:warehouse'],
+    ['owner', '/api/stock/movements?cataloguePartId=:part'],
+    ['technician', '/api/stock/my-van'],
+    ['owner', '/api/stock/reorder'],
+    ['technician', '/api/work-orders/:workOrder/parts-used'],
+    ['technician', '/api/boards/:board/catalogue-fits'],
+    ['dispatcher', '/api/route-days'],
+    ['technician', '/api/my-day'],
+    ['dispatcher', '/api/care-plans'],
+    ['dispatcher', '/api/care-plans?q=clean'],
+    ['dispatcher', '/api/care-plans/:carePlan'],
+    ['dispatcher', '/api/work-orders'],
+    ['dispatcher', '/api/work-orders?due=overdue'],
+    ['dispatcher', '/api/work-orders?due=due_soon'],
+    ['technician', '/api/work-orders?technicianId=me'],
+    ['dispatcher', '/api/work-orders?venueId=:venue'],
+    ['dispatcher', '/api/work-orders?gameId=:game'],
+    ['dispatcher', '/api/work-orders?carePlanId=:carePlan'],
+    ['dispatcher', '/api/work-orders?state=done&order=desc'],
+    ['technician', '/api/work-orders/:workOrder'],
+    ['technician', '/api/games/:game/meters'],
+    ['technician', '/api/games/:game/meter-readings/latest'],
+    ['owner', '/api/games/:game/keep-cost'],
   ];
   const resolve = (path: string) =>
     path
@@ -204,7 +262,12 @@ describe('query plans at scale, as the app role under row-level security', () =>
       .replace(':instance', bench.instanceId)
       .replace(':openJob', bench.openJobId)
       .replace(':job', bench.jobId)
-      .replace(':template', bench.templateId);
+      .replace(':template', bench.templateId)
+      .replace(':part', stock.partId)
+      .replace(':warehouse', stock.warehouseId)
+      .replace(/:van/g, stock.vanId)
+      .replace(':workOrder', stock.workOrderId)
+      .replace(':carePlan', carePlanId);
 
   it.each(reads)('%s GET %s reads company tables only through indexes', async (role, path) => {
     const found = await readsOf(agents[role]!, resolve(path));
@@ -232,6 +295,19 @@ describe('query plans at scale, as the app role under row-level security', () =>
       found.map((r) => r.text.slice(0, 120)),
       'one statement per board, or per table, would show here',
     ).toHaveLength(3);
+  });
+
+  it('the office’s route days read each kind of work through its (company, technician, day) partial index, once for every technician', async () => {
+    const found = await readsOf(agents.dispatcher!, '/api/route-days');
+    const indexes = new Set<string>();
+    for (const read of found) {
+      for (const n of nodes(await planOf(largest.people.dispatcher.id, read))) if (n['Index Name']) indexes.add(n['Index Name']);
+    }
+    expect([...indexes]).toEqual(
+      expect.arrayContaining(['service_calls_tenant_tech_open_idx', 'work_orders_tenant_tech_day_idx', 'bench_jobs_tenant_tech_day_idx']),
+    );
+    // The company's clock, the technicians with their days, then one statement per kind of work.
+    expect(found.map((r) => r.text.slice(0, 80))).toHaveLength(5);
   });
 
   it('the open-calls list walks the partial index of open calls in target order, and stops at the page', async () => {

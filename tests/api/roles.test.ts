@@ -1,6 +1,8 @@
 // Each role against the permission table, one probe per permission (tests/api/permissions.test.ts walks
 // every route the same way).
 import request from 'supertest';
+import { sql } from 'drizzle-orm';
+import { carePlans, workOrders } from '@bumperline/db/schema/index';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { permissions, roles, type Permission, type Role } from '@bumperline/contracts/roles';
 import { buildTestApp, JSON_HEADERS, signedInAgent, type TestApp } from '../support/app.ts';
@@ -38,9 +40,45 @@ describe('roles', () => {
       .set(JSON_HEADERS)
       .send({ name: 'Probe template', steps: [benchStep] })
       .expect(201);
+    // A technician whose route day the office re-plans, and dates no other probe has changed.
+    const board = await ownerAgent.get('/api/route-days').expect(200);
+    const technicianId = (board.body as { days: { technician: { id: string } }[] }).days[0]!.technician.id;
+    let probeDays = 0;
+    const probeDay = () => `2030-02-${String(++probeDays).padStart(2, '0')}`;
+    // Open work orders, fresh for each probe that closes or re-plans one, and rising meter readings.
+    const technicianUser = await t.db.owner.execute<{ id: string }>(sql`select id from users where email = ${people.technician}`);
+    const careTechnicianId = technicianUser.rows[0]!.id;
+    const freshOrder = async () => {
+      const [plan] = await t.db.owner
+        .insert(carePlans)
+        .values({
+          tenantId: company.tenantId,
+          name: `Probe plan ${Math.random()}`,
+          scope: 'model',
+          modelId: company.modelId,
+          tasks: ['Probe'],
+          onSiteMinutes: 30,
+          playsEvery: 1000,
+        })
+        .returning({ id: carePlans.id });
+      const [order] = await t.db.owner
+        .insert(workOrders)
+        .values({
+          tenantId: company.tenantId,
+          carePlanId: plan!.id,
+          gameId: company.gameIds[0]!,
+          dueAt: new Date(),
+          dueReason: 'plays',
+          title: 'Probe',
+          onSiteMinutes: 30,
+        })
+        .returning({ id: workOrders.id });
+      return order!.id;
+    };
+    let probeReading = 0;
     // calls:contacts guards no route: it decides whether a call's message recipients show in full
     // (tests/api/call-contacts.test.ts walks it per role).
-    const probes: Record<Exclude<Permission, 'calls:contacts'>, (a: ReturnType<typeof request.agent>) => request.Test> = {
+    const probes: Record<Exclude<Permission, 'calls:contacts'>, (a: ReturnType<typeof request.agent>) => PromiseLike<request.Response>> = {
       'venues:read': (a) => a.get('/api/venues'),
       'venues:write': (a) =>
         a.post('/api/venues').set(JSON_HEADERS).send({ name: 'Probe', addressLine: '1 Probe St', city: 'X', latitude: 1, longitude: 1 }),
@@ -79,6 +117,45 @@ describe('roles', () => {
           .post('/api/bench-templates')
           .set(JSON_HEADERS)
           .send({ name: `Probe template ${Math.random()}`, steps: [benchStep] }),
+      'route-days:read': (a) => a.get('/api/route-days'),
+      'route-days:plan': (a) => a.post(`/api/route-days/${technicianId}/${probeDay()}/reset-order`).set(JSON_HEADERS).send({ version: 0 }),
+      'stock:read': (a) => a.get('/api/stock/locations'),
+      'stock:manage': (a) =>
+        a
+          .post('/api/stock/locations')
+          .set(JSON_HEADERS)
+          .send({ kind: 'warehouse', name: `Probe shelves ${Math.random()}` }),
+      // Makes the person's van on first use; answers it again after.
+      'stock:move': (a) => a.post('/api/stock/my-van').set(JSON_HEADERS),
+      'care-plans:read': (a) => a.get('/api/care-plans'),
+      'care-plans:write': (a) =>
+        a
+          .post('/api/care-plans')
+          .set(JSON_HEADERS)
+          .send({
+            name: `Probe plan ${Math.random()}`,
+            scope: 'model',
+            modelId: company.modelId,
+            tasks: ['Probe'],
+            onSiteMinutes: 30,
+            playsEvery: 1000,
+          }),
+      // Giving work to a technician is planning; a technician may move only the day of their own.
+      'work-orders:plan': async (a) =>
+        a
+          .post(`/api/work-orders/${await freshOrder()}/move`)
+          .set(JSON_HEADERS)
+          .send({ version: 1, technicianId: careTechnicianId }),
+      'work-orders:work': async (a) =>
+        a
+          .post(`/api/work-orders/${await freshOrder()}/skip`)
+          .set(JSON_HEADERS)
+          .send({ version: 1, reason: 'Probe' }),
+      'meters:write': (a) =>
+        a
+          .post(`/api/games/${company.gameIds[0]}/meter-readings`)
+          .set(JSON_HEADERS)
+          .send({ meter: 'plays', reading: (probeReading += 10) }),
       'boards:write': (a) =>
         a
           .put(`/api/games/${company.gameIds[0]}/cabinet-profile`)

@@ -16,7 +16,7 @@ let result: ScaleResult;
 beforeAll(async () => {
   db = await freshDatabase();
   result = await seedScale({ ...options, ownerUrl: db.ownerUrl, analyze: false });
-}, 60_000);
+}, 120_000);
 afterAll(() => db.drop());
 
 const rows = async <T>(query: ReturnType<typeof sql>) => (await db.owner.execute(query)).rows as T[];
@@ -181,6 +181,64 @@ describe('scale seed', () => {
     for (const job of states.get('in_progress')!) expect(job.readings).toBe(0);
   });
 
+  it('writes care plans with years of work orders, most open work planned for a technician who has the skills and a van', async () => {
+    const [largest] = await rows<{ plans: number; models: number; done: number; skipped: number; open: number; planned: number }>(sql`
+      select (select count(*)::int from care_plans where tenant_id = ${result.largestTenantId}) as plans,
+             (select count(*)::int from game_models where tenant_id = ${result.largestTenantId}) as models,
+             count(*) filter (where state = 'done')::int as done, count(*) filter (where state = 'skipped')::int as skipped,
+             count(*) filter (where state = 'open')::int as open,
+             count(*) filter (where state = 'open' and planned_on is not null)::int as planned
+      from work_orders where tenant_id = ${result.largestTenantId}`);
+    // The largest company keeps a plan (or two) on every model.
+    expect(largest!.plans).toBeGreaterThanOrEqual(largest!.models);
+    expect(largest!.done).toBeGreaterThan(20 * largest!.open);
+    expect(largest!.skipped).toBeGreaterThan(0);
+    expect(largest!.open).toBeGreaterThan(0);
+    expect(largest!.planned).toBeGreaterThan(0.5 * largest!.open);
+    const bad = await rows<{ id: string }>(sql`
+      select w.id from work_orders w where
+        (w.state = 'done' and (w.labour_minutes is null or w.closed_at is null or w.plays_at_done is null))
+        or (w.state = 'open' and (w.closed_at is not null or (w.planned_on is not null and w.technician_id is null)))
+        or (w.technician_id is not null and w.state = 'open' and (
+              not exists (select 1 from stock_locations l where l.tenant_id = w.tenant_id and l.technician_id = w.technician_id and l.kind = 'van')
+              or not exists (select 1 from technician_profiles t where t.tenant_id = w.tenant_id and t.user_id = w.technician_id
+                             and t.skills @> w.skills)))`);
+    expect(bad).toEqual([]);
+    // At most one open work order per plan and game (the unique index would have refused the load otherwise).
+    const [readings] = await rows<{ n: number; by_work_order: number }>(sql`
+      select count(*)::int as n, count(*) filter (where source = 'work_order' and work_order_id is not null)::int as by_work_order
+      from meter_readings where tenant_id = ${result.largestTenantId}`);
+    expect(readings!.n).toBeGreaterThan(150 * 40);
+    expect(readings!.by_work_order).toBeGreaterThan(0);
+  });
+
+  it('keeps stock at or above zero, takes each part used off a van, and keeps each job’s cost equal to its parts and labour', async () => {
+    const [stock] = await rows<{ parts: number; negative: number; to_order: number; vans_missing: number }>(sql`
+      select (select count(*)::int from catalogue_parts where tenant_id = ${result.largestTenantId}) as parts,
+             (select count(*)::int from stock_levels where quantity < 0) as negative,
+             (select count(*)::int from stock_levels where quantity <= reorder_point) as to_order,
+             (select count(*)::int from technician_profiles t where not exists (
+                select 1 from stock_locations l where l.tenant_id = t.tenant_id and l.technician_id = t.user_id and l.kind = 'van')) as vans_missing`);
+    expect(stock!.parts).toBeGreaterThan(100);
+    expect(stock).toMatchObject({ negative: 0, vans_missing: 0 });
+    expect(stock!.to_order).toBeGreaterThan(0);
+    expect(result.rows.part_fits).toBeGreaterThan(0);
+    const mismatched = await rows<{ id: string }>(sql`
+      select u.id from parts_used u join stock_movements m on m.tenant_id = u.tenant_id and m.id = u.movement_id
+      where m.reason <> 'used' or m.quantity <> u.quantity or m.from_location_id <> u.location_id or m.unit_cost_cents <> u.unit_cost_cents`);
+    expect(result.rows.parts_used).toBeGreaterThan(0);
+    expect(mismatched).toEqual([]);
+    const wrong = await rows<{ id: string }>(sql`
+      select k.id from keep_cost_entries k
+      join tenant_settings s on s.tenant_id = k.tenant_id
+      left join lateral (select sum(round(u.quantity * u.unit_cost_cents)) as cents from parts_used u
+                         where u.tenant_id = k.tenant_id and (u.work_order_id = k.source_id or u.service_call_id = k.source_id)) p on true
+      where k.parts_cents <> coalesce(p.cents, 0) or k.labour_cents <> round(k.labour_minutes * k.labour_rate_cents / 60.0)
+         or k.labour_rate_cents <> s.labour_rate_cents`);
+    expect(result.rows.keep_cost_entries).toBeGreaterThan(0);
+    expect(wrong).toEqual([]);
+  });
+
   it('loads the same rows from the same seed', async () => {
     const other = await freshDatabase();
     try {
@@ -190,10 +248,13 @@ describe('scale seed', () => {
           .rows[0],
         (await d.owner.execute(sql`select md5(string_agg(id::text || measured_text || verdict, ',' order by id)) as f from part_readings`))
           .rows[0],
+        (await d.owner.execute(sql`select md5(string_agg(id::text || state || due_at::text, ',' order by id)) as f from work_orders`))
+          .rows[0],
+        (await d.owner.execute(sql`select md5(string_agg(id::text || quantity::text, ',' order by id)) as f from stock_movements`)).rows[0],
       ];
       expect(await fingerprint(other)).toEqual(await fingerprint(db));
     } finally {
       await other.drop();
     }
-  }, 60_000);
+  }, 120_000);
 });

@@ -55,10 +55,47 @@ describe('statements per request', () => {
     ['technician', '/api/board-instances/:boardInstance', 10],
     // The company's today; every board, their electrolytics, every cabinet profile.
     ['technician', '/api/recap-due', 8],
+    ['technician', '/api/parts?locationId=:van', 5],
+    // The part, where it is kept, what it fits.
+    ['owner', '/api/parts/:part', 7],
+    ['owner', '/api/stock/locations', 5],
+    // The stock, its page of levels.
+    ['owner', '/api/stock/locations/:warehouse/levels', 6],
+    // The newest from the stock and the newest to it, then the page's names.
+    ['owner', '/api/stock/movements?locationId=:van', 7],
+    ['owner', '/api/stock/movements?cataloguePartId=:part', 6],
+    // The van, what is on it.
+    ['technician', '/api/stock/my-van', 6],
+    ['owner', '/api/stock/reorder', 5],
+    // The work order, its parts.
+    ['technician', '/api/work-orders/:workOrder/parts-used', 6],
+    // The board, the person's van, the fits.
+    ['technician', '/api/boards/:modelBoard/catalogue-fits', 7],
+    // The company's clock and speed; the technicians with their day's kept order; calls, work orders, bench jobs.
+    ['dispatcher', '/api/route-days?day=2026-12-03', 9],
+    ['technician', '/api/my-day?day=2026-12-03', 9],
+    // Care plans: the page of plans.
+    ['dispatcher', '/api/care-plans', 5],
+    // The plan, the company's zone, its games and their count, their open orders; for due dates the last closed
+    // orders, the newest and earliest meter readings and the games' meters.
+    ['dispatcher', '/api/care-plans/:carePlan', 13],
+    // The company's zone, the page.
+    ['dispatcher', '/api/work-orders', 6],
+    ['technician', '/api/work-orders/:workOrder', 6],
+    // The game, then its meters / newest readings; the keep cost also the company's currency.
+    ['technician', '/api/games/:game/meters', 6],
+    ['technician', '/api/games/:game/meter-readings/latest', 6],
+    ['owner', '/api/games/:game/keep-cost', 7],
   ];
   const resolve = (path: string) =>
     path
       .replace(':benchJob', f.company.bench.benchJobId)
+      .replace(':part', f.company.care.cataloguePartId)
+      .replace(':warehouse', f.company.care.warehouseId)
+      .replace(':van', f.company.care.vanId)
+      .replace(':workOrder', f.company.care.workOrderId)
+      .replace(':carePlan', f.company.care.carePlanId)
+      .replace(':modelBoard', f.company.bench.modelBoardId)
       .replace(':boardInstance', f.company.bench.boardInstanceId)
       .replace(':call', f.company.downCallId)
       .replace(':game', f.company.gameIds[0]!)

@@ -91,6 +91,7 @@ function endpointsFor(c: Company): Endpoint[] {
     { name: 'activity (50)', kind: 'list', path: '/api/activity?limit=50' },
     { name: 'settings', kind: 'detail', path: '/api/settings' },
     { name: 'company', kind: 'detail', path: '/api/company' },
+    { name: 'route days: office board (today)', kind: 'summary', path: '/api/route-days' },
     ...benchEndpointsFor(c.bench),
   ];
   return ONLY ? all.filter((e) => ONLY.some((part) => e.name.includes(part))) : all;

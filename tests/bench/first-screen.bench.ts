@@ -30,7 +30,7 @@ const screens: Screen[] = [
   { role: 'owner', screen: 'Calls (map)', path: '/calls', ready: 'Every open service call', jsTargetKb: 220 },
   { role: 'dispatcher', screen: 'Today', path: '/today', ready: 'Down now', jsTargetKb: 150, lcpTargetMs: 1000 },
   { role: 'dispatcher', screen: 'Calls (map)', path: '/calls', ready: 'Every open service call', jsTargetKb: 220 },
-  { role: 'technician', screen: 'home (Today)', path: '/today', ready: 'My calls', jsTargetKb: 150, lcpTargetMs: 1000 },
+  { role: 'technician', screen: 'home (My day)', path: '/my-day', ready: 'Stops in driving order', jsTargetKb: 150, lcpTargetMs: 1000 },
   { role: 'venue contact', screen: 'venue view', path: '/today', ready: 'Your games at' },
 ];
 

@@ -1,7 +1,7 @@
 // Boards in games: the game page's boards and cabinet profile, a board's page with its reading charts, and the
 // recap list — walked by a technician at desk and phone widths, each screen scanned with axe.
 import { expect, test, type Page } from '@playwright/test';
-import { demo, failOnConsoleErrors, scan, signIn } from './fixtures.ts';
+import { demo, failOnConsoleErrors, openSection, scan, signIn } from './fixtures.ts';
 
 interface FleetRow {
   boardInstanceId: string;
@@ -68,7 +68,7 @@ for (const width of [1280, 390]) {
     await scan(page, `boards-board-${width}`);
 
     // The recap list, overdue first, filtered by status.
-    await page.getByRole('link', { name: 'Recap due' }).click();
+    await openSection(page, 'Recap due');
     await expect(page.getByRole('heading', { name: 'Recap due' })).toBeVisible();
     await expect(page.getByText(/recap now: overdue since/i).first()).toBeVisible();
     // One page of the ranking, with where it stands in the whole list; Next and Previous walk the pages.

@@ -19,6 +19,17 @@ export async function signIn(page: Page, email: string, password = DEMO_PASSWORD
   await expect(page.getByRole('heading', { level: 1 })).not.toHaveText('Sign in');
 }
 
+/**
+ * Opens a section of the app as a person would: from the side navigation on a wide screen, from "More" on a phone
+ * (where the bottom bar holds only the role's main destinations).
+ */
+export async function openSection(page: Page, name: string) {
+  const side = page.getByRole('navigation', { name: 'Sections' });
+  if (await side.isVisible()) return side.getByRole('link', { name, exact: true }).click();
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('button', { name: 'More' }).click();
+  await page.getByRole('dialog', { name: 'Menu' }).getByRole('link', { name, exact: true }).click();
+}
+
 /** Fails on any serious or critical accessibility violation (axe-core, WCAG 2.x A/AA rules). */
 export async function scan(page: Page, name: string) {
   await page.waitForLoadState('networkidle');

@@ -2,7 +2,7 @@
 // rows pasted from a spreadsheet fill the table, each cell shows its problem as it is typed, a save by someone
 // else in between is reported rather than overwritten, and a CSV file comes in only once it has no problems.
 import { expect, test, type Page } from '@playwright/test';
-import { demo, failOnConsoleErrors, scan, signIn } from './fixtures.ts';
+import { demo, failOnConsoleErrors, openSection, scan, signIn } from './fixtures.ts';
 
 const HEADER = 'designator,kind,value,tolerance,rating,rated_temperature_c,rated_life_hours,notes';
 
@@ -112,7 +112,7 @@ test('a technician edits a power supply’s parts list with the keyboard, a past
   await frame.evaluate((el) => el.scrollBy(320, 0));
   await expect(cell(page, 'Designator', 'F1')).toBeInViewport();
   await page.screenshot({ path: 'e2e/screenshots/parts-list-phone.png' });
-  await page.getByRole('navigation', { name: 'Sections' }).getByRole('link', { name: 'Parts lists' }).click();
+  await openSection(page, 'Parts lists');
   await expect(page.getByRole('heading', { name: 'Parts lists', level: 1 })).toBeVisible();
   await page.screenshot({ path: 'e2e/screenshots/parts-lists-phone.png', fullPage: true });
   expect(logged).toEqual(['Failed to load resource: the server responded with a status of 409 (Conflict)']);

@@ -1,6 +1,6 @@
 // Each role signs in and walks its screens in Chromium; every screen is scanned with axe.
 import { expect, test, type APIRequestContext } from '@playwright/test';
-import { demo, failOnConsoleErrors, scan, signIn } from './fixtures.ts';
+import { demo, failOnConsoleErrors, openSection, scan, signIn } from './fixtures.ts';
 
 test('visitors see the landing page and the sign-in page', async ({ page }) => {
   const check = failOnConsoleErrors(page);
@@ -92,16 +92,22 @@ test('dispatcher: venues and games, no team management, no activity', async ({ p
 test('technician (on a phone): reads games and venues, cannot edit, switches company', async ({ page }) => {
   await page.setViewportSize({ width: 390, height: 844 });
   await signIn(page, demo.technician);
-  await expect(page.getByRole('heading', { name: 'Today' })).toBeVisible();
+  // A technician's home is My day.
+  await expect(page.getByRole('heading', { name: 'My day' })).toBeVisible();
   await scan(page, 'technician-today');
-  await page.getByRole('link', { name: 'Games', exact: true }).click();
+  await openSection(page, 'Games');
   await expect(page.getByRole('link', { name: 'Add game' })).toHaveCount(0);
   await scan(page, 'technician-games');
   await page.goto('/venues/new');
   await expect(page.getByRole('heading', { name: 'Not available for your role' })).toBeVisible();
   // Ilse also works for the second company.
-  await page.getByRole('combobox', { name: 'Company' }).selectOption({ label: 'Prairie Pinball Partners (Technician)' });
-  await page.getByRole('link', { name: 'Venues' }).click();
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('button', { name: 'More' }).click();
+  await page
+    .getByRole('dialog', { name: 'Menu' })
+    .getByRole('combobox', { name: 'Company' })
+    .selectOption({ label: 'Prairie Pinball Partners (Technician)' });
+  await expect(page.getByRole('dialog', { name: 'Menu' })).toBeHidden();
+  await openSection(page, 'Venues');
   await expect(page.getByRole('link', { name: 'Gravel Road Roadhouse' })).toBeVisible();
   await expect(page.getByRole('link', { name: /Juniper/ })).toHaveCount(0);
   await scan(page, 'technician-second-company');

@@ -9,6 +9,7 @@ import request from 'supertest';
 import { Router, type Express } from 'express';
 import { devRouter } from '@bumperline/api/routes/dev';
 import { devPhoneRouter } from '@bumperline/api/routes/dev-phone';
+import { devCarePlansRouter } from '@bumperline/api/routes/dev-care-plans';
 import { createApp } from '@bumperline/api/app';
 import { createMailer } from '@bumperline/api/services/mailer';
 import { SignInLimiter, type SignInLimits } from '@bumperline/api/auth/sign-in-limiter';
@@ -71,9 +72,9 @@ async function startTestSms(): Promise<{ sms: TestSms; server: http.Server }> {
 }
 
 /** The demo's developer pages over this app's fakes, as startup/demo.ts builds them. */
-function devPages(mail: MailFake, sms?: SmsFake): Router {
+function devPages(mail: MailFake, sms: SmsFake | undefined, appDb: Db): Router {
   const router = Router();
-  router.use(devRouter(mail));
+  router.use(devRouter(mail), devCarePlansRouter(appDb));
   if (sms) router.use(devPhoneRouter(sms));
   return router;
 }
@@ -94,12 +95,12 @@ export async function buildTestApp(
   const app = createApp({
     db: appDb,
     mailer: createMailer({ fakePort: mail.port, from: 'Bumperline test <test@bumperline.example>' }),
-    logger: pino({ level: 'silent' }),
+    logger: pino({ level: process.env.TEST_LOG ?? 'silent' }),
     authSecret: 'test-secret-that-is-at-least-32-characters-long',
     smsAuthToken: SMS_AUTH_TOKEN,
     photos: folderPhotoStore(path.join(os.tmpdir(), 'bumperline-test-photos')),
     appOrigin: ORIGIN,
-    devPages: devPages(mail, sms?.sms.fake),
+    devPages: devPages(mail, sms?.sms.fake, appDb),
     signInLimiter: new SignInLimiter(postgresCounter(appDb), { perAccount: opts.signInLimit ?? 50, ...opts.signInLimits }),
   });
   sms?.server.on('request', app);

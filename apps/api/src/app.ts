@@ -40,6 +40,13 @@ import { boardsRouter } from './routes/boards.ts';
 import { partsListsRouter } from './routes/parts-lists.ts';
 import { benchTemplatesRouter } from './routes/bench-templates.ts';
 import { benchJobsRouter } from './routes/bench-jobs.ts';
+import { partsCatalogueRouter } from './routes/parts-catalogue.ts';
+import { stockRouter } from './routes/stock.ts';
+import { partsUsedRouter } from './routes/parts-used.ts';
+import { routeDaysRouter } from './routes/route-days.ts';
+import { carePlansRouter } from './routes/care-plans.ts';
+import { workOrdersRouter } from './routes/work-orders.ts';
+import { metersRouter } from './routes/meters.ts';
 
 export interface AppDeps {
   db: Db;
@@ -137,6 +144,13 @@ export function createApp(deps: AppDeps): Express {
   api.use(partsListsRouter(scoped));
   api.use('/bench-templates', benchTemplatesRouter(scoped));
   api.use('/bench-jobs', benchJobsRouter({ scoped, photos: deps.photos }));
+  api.use(partsCatalogueRouter(scoped));
+  api.use('/stock', stockRouter(scoped));
+  api.use(partsUsedRouter(scoped));
+  api.use(routeDaysRouter({ scoped, appOrigin: deps.appOrigin }));
+  api.use('/care-plans', carePlansRouter(scoped));
+  api.use('/work-orders', workOrdersRouter(scoped));
+  api.use(metersRouter(scoped));
   api.use(notFoundHandler);
   app.use('/api', api);
 
@@ -146,7 +160,18 @@ export function createApp(deps: AppDeps): Express {
     const index = path.join(deps.webDist, 'index.html');
     // Bundles under /assets carry a content hash in their names: a browser may keep them for good.
     app.use('/assets', express.static(path.join(deps.webDist, 'assets'), { immutable: true, maxAge: '1y' }));
-    app.use(express.static(deps.webDist, { index: false, maxAge: '1h' }));
+    // The service worker and its manifest keep their names across releases: always revalidated, so a new
+    // release reaches the phones on their next load instead of an hour later.
+    const revalidated = /(^|\/)(sw\.js|manifest\.webmanifest)$/;
+    app.use(
+      express.static(deps.webDist, {
+        index: false,
+        maxAge: '1h',
+        setHeaders: (res, file) => {
+          if (revalidated.test(file)) res.setHeader('Cache-Control', 'no-cache');
+        },
+      }),
+    );
     // Client-side routes: every other GET gets the app shell — but a missing file under /assets (a source
     // map, an old bundle) is a 404, not a page, and so is /dev/… wherever the demo's pages are not mounted.
     app.get('/{*path}', (req, res, next) =>

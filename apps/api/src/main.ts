@@ -39,6 +39,7 @@ const demoKit =
         await import('./startup/demo.ts')
       ).startDemo({
         ownerUrl: urls.ownerUrl,
+        appUrl: urls.appUrl,
         dataDir,
         appOrigin: env.appOrigin,
         listenUrl: `http://${env.HOST}:${env.PORT}`,

@@ -5,9 +5,18 @@ import { createRoot } from 'react-dom/client';
 import '@fontsource-variable/nunito-sans/wght.css';
 import './styles.css';
 import { App } from './app/app.tsx';
+import { startOfflineStore } from './app/offline-store.ts';
+import { queryClient } from './app/query-client.ts';
+import { registerServiceWorker } from './app/service-worker.ts';
+import { applyStoredTheme } from './app/theme.ts';
 
-createRoot(document.getElementById('root')!).render(
-  <StrictMode>
-    <App />
-  </StrictMode>,
+applyStoredTheme();
+registerServiceWorker();
+// The phone's saved day and queued changes are back in the cache before the first screen asks for them.
+void startOfflineStore(queryClient).then(() =>
+  createRoot(document.getElementById('root')!).render(
+    <StrictMode>
+      <App />
+    </StrictMode>,
+  ),
 );

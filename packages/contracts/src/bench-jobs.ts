@@ -161,6 +161,7 @@ export const benchPartUsed = z.strictObject({
     .int({ error: 'must be a whole number' })
     .min(1, { error: 'must be at least 1' })
     .max(999),
+  cataloguePartId: uuid.nullable().optional(),
 }) satisfies z.ZodType<BenchPartUsed>;
 
 export const benchJobDraft = z.strictObject({

@@ -108,6 +108,8 @@ export interface BenchPartUsed {
   partId: string | null;
   description: string;
   quantity: number;
+  /** The catalogue part fitted, when picked from the catalogue: finishing takes it off the finisher's van. */
+  cataloguePartId?: string | null;
 }
 
 export interface BenchJobDraft {

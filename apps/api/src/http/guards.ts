@@ -4,6 +4,7 @@ import type { Request, RequestHandler, Response } from 'express';
 import { can, type Permission } from '@bumperline/contracts/roles';
 import { withScope, type Db, type Tx } from '@bumperline/db/client';
 import { ForbiddenError, UnauthorizedError } from './errors.ts';
+import { applyOnce, idempotencyKeyOf, REPLAYED_HEADER, type Answer } from './idempotency.ts';
 import type { Actor } from './context.ts';
 
 export type TenantActor = Actor & { tenantId: string; role: NonNullable<Actor['role']> };
@@ -40,14 +41,23 @@ export function makeScoped(db: Db) {
   return function scoped<T>(permission: Permission, handler: (ctx: ScopedContext) => Promise<T>, status = 200): GuardedHandler {
     const guarded: RequestHandler = async (req, res) => {
       const actor = requirePermission(req, permission);
+      const key = idempotencyKeyOf(req);
       const later: (() => Promise<void>)[] = [];
-      const result = await withScope(db, { tenantId: actor.tenantId, userId: actor.userId }, (tx) =>
-        handler({ tx, actor, req, res, afterCommit: (fn) => later.push(fn) }),
-      );
+      const answer = await withScope(db, { tenantId: actor.tenantId, userId: actor.userId }, async (tx) => {
+        const run = async (): Promise<Answer> => {
+          const result = await handler({ tx, actor, req, res, afterCommit: (fn) => later.push(fn) });
+          // A handler that wrote its own answer (a file) has nothing to replay but its status.
+          if (res.headersSent) return { status: res.statusCode, body: null };
+          return result === undefined ? { status: 204, body: null } : { status, body: result };
+        };
+        // A change sent with an Idempotency-Key is applied once; a repeat gets the first answer (idempotency.ts).
+        return key ? applyOnce(tx, req, actor, key, run) : { ...(await run()), replayed: false };
+      });
       for (const fn of later) await fn().catch((err: unknown) => req.log?.error({ err }, 'after-commit work failed'));
       if (!res.headersSent) {
-        if (result === undefined) res.status(204).end();
-        else res.status(status).json(result);
+        if (answer.replayed) res.set(REPLAYED_HEADER, 'true');
+        if (answer.status === 204) res.status(204).end();
+        else res.status(answer.status).json(answer.body);
       }
     };
     return Object.assign(guarded, { permission });

@@ -1,5 +1,5 @@
 // The scheduled jobs (node-cron): the outbox worker every 10 seconds, response-target warnings every
-// minute, expired rate-limit counters cleared every 10 minutes. Each run first takes a PostgreSQL
+// minute, expired rate-limit counters cleared every 10 minutes, due care-plan work every 15 minutes (and at start-up). Each run first takes a PostgreSQL
 // advisory lock, so with several API instances one runs and the others skip that tick.
 import cron, { type ScheduledTask } from 'node-cron';
 import type { Db } from '@bumperline/db/client';
@@ -10,6 +10,7 @@ import type { SmsSender } from '../services/sms.ts';
 import { runOutboxOnce } from './outbox-worker.ts';
 import { runTargetWarningsOnce } from './target-warnings.ts';
 import { runRateLimitCleanupOnce } from './rate-limit-cleanup.ts';
+import { runCarePlansOnce } from './care-plan-run.ts';
 
 export interface JobDeps {
   db: Db;
@@ -18,7 +19,7 @@ export interface JobDeps {
   logger: Logger;
   appOrigin: string;
   /** Cron expressions (seconds first) overriding the defaults, for tests. */
-  schedules?: { outbox?: string; targetWarnings?: string; rateLimitCleanup?: string };
+  schedules?: { outbox?: string; targetWarnings?: string; rateLimitCleanup?: string; carePlans?: string };
 }
 
 /** One advisory-lock key per job (any constant bigint; "BL" in the high bytes keeps them recognisable). */
@@ -26,6 +27,7 @@ export const JOB_LOCKS = {
   outbox: 0x424c_0001,
   targetWarnings: 0x424c_0002,
   rateLimitCleanup: 0x424c_0003,
+  carePlans: 0x424c_0004,
 } as const;
 
 /**
@@ -57,6 +59,7 @@ export function startJobs(deps: JobDeps): { stop(): void } {
     }
   };
 
+  const carePlanRun = step('carePlans', () => runCarePlansOnce({ db, logger }));
   const tasks: ScheduledTask[] = [
     cron.schedule(
       deps.schedules?.outbox ?? '*/10 * * * * *',
@@ -73,7 +76,10 @@ export function startJobs(deps: JobDeps): { stop(): void } {
       step('rateLimitCleanup', () => runRateLimitCleanupOnce({ db })),
       { name: 'rate-limit-cleanup', noOverlap: true },
     ),
+    cron.schedule(deps.schedules?.carePlans ?? '0 */15 * * * *', carePlanRun, { name: 'care-plans', noOverlap: true }),
   ];
+  // Once at start-up as well: due work missed while no instance ran is made up at once (the run is state-based).
+  void carePlanRun();
   return {
     stop() {
       for (const task of tasks) void task.destroy();

@@ -21,6 +21,8 @@ import { insertPartReadings, type PartReadingInsert } from '@bumperline/db/queri
 import { diodeSetText, type BenchEvaluation } from '@bumperline/domain/components/bench-judgement';
 import { benchJobView, judgeBenchDraft } from './bench-job-view.ts';
 import { companyToday } from './company-today.ts';
+import { recordKeepCost } from './keep-cost.ts';
+import { takeBenchPartsOffVan } from './bench-parts-stock.ts';
 import { Conflict, InvalidInput, NotFound } from './workflow-errors.ts';
 
 export interface BenchActor {
@@ -33,7 +35,7 @@ type Field = { field: string; message: string };
 /** Opens a job on a board: the template's name and steps are copied, so later edits to the template leave it alone. */
 export async function openBenchJob(
   tx: Tx,
-  p: { boardInstanceId: string; templateId: string; serviceCallId?: string | null; actor: BenchActor },
+  p: { boardInstanceId: string; templateId: string; serviceCallId?: string | null; fromWorkOrder?: boolean; actor: BenchActor },
 ): Promise<string> {
   const board = await getBoardInstance(tx, p.boardInstanceId);
   if (!board) throw new NotFound('board');
@@ -52,7 +54,7 @@ export async function openBenchJob(
     templateId: template.id,
     templateName: template.name,
     steps: template.steps,
-    origin: p.serviceCallId ? 'service_call' : 'game',
+    origin: p.fromWorkOrder ? 'care_plan' : p.serviceCallId ? 'service_call' : 'game',
     serviceCallId: p.serviceCallId ?? null,
     draft: { steps: Object.fromEntries(template.steps.map((s) => [s.key, emptyStepProgress()])), partsUsed: [] },
     openedBy: p.actor.userId,
@@ -182,9 +184,23 @@ export async function finishBenchJob(tx: Tx, p: { jobId: string; version: number
   await insertBenchJobPartsUsed(
     tx,
     job.id,
-    job.draft.partsUsed.map((u) => ({ partId: u.partId, description: u.description.trim(), quantity: u.quantity })),
+    job.draft.partsUsed.map((u) => ({
+      partId: u.partId,
+      description: u.description.trim(),
+      quantity: u.quantity,
+      cataloguePartId: u.cataloguePartId ?? null,
+    })),
   );
+  await takeBenchPartsOffVan(tx, p.actor, job.id, job.draft.partsUsed);
   if ((await markBenchJobFinished(tx, job.id, p.version, p.actor.userId)) === undefined) throw await staleVersion(tx, job.id, p.version);
+  if (board.gameId)
+    await recordKeepCost(tx, {
+      source: 'bench_job',
+      sourceId: job.id,
+      gameId: board.gameId,
+      labourMinutes: 0,
+      technicianId: p.actor.userId,
+    });
   if (recapsBoard(job.steps, job.draft)) {
     const today = await companyToday(tx, p.actor.tenantId);
     if (!(await updateBoardInstance(tx, board.id, board.version, { lastRecapOn: today }))) {

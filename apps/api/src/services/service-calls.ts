@@ -31,6 +31,7 @@ import { venueContactEmails } from '@bumperline/db/queries/venue-contacts';
 import { Conflict, InvalidInput, NotAllowed, NotFound } from './workflow-errors.ts';
 import { reporterUpdateSms, technicianAssignedSms, venueCallClosedEmail, venueCallOpenedEmail } from './call-messages.ts';
 import { appLink } from './links.ts';
+import { recordServiceCallKeepCost } from './keep-cost.ts';
 
 export interface CallActor {
   userId: string | null;
@@ -184,6 +185,7 @@ export async function transitionCall(
     await updateGame(tx, call.gameId, game.version, { status: 'in_shop' });
   } else if (p.to === 'fixed' || p.to === 'cancelled') {
     await gameBackInService(tx, call.gameId, now);
+    if (p.to === 'fixed') await recordServiceCallKeepCost(tx, { callId: call.id, gameId: call.gameId, technicianId: call.technicianId, fixedAt: now });
   } else if (p.to === 'on_site' && call.state === 'fixed') {
     await gameFollowsCall(tx, call.gameId, call.severity, call.id, now); // reopened: not fixed after all
   }

@@ -9,6 +9,7 @@ import { startMailFake } from '@bumperline/fakes/mail/mail-fake';
 import { startSmsFake } from '@bumperline/fakes/sms/sms-fake';
 import { devRouter } from '../routes/dev.ts';
 import { devPhoneRouter } from '../routes/dev-phone.ts';
+import { devCarePlansRouter } from '../routes/dev-care-plans.ts';
 import { installationSecrets } from './installation-secrets.ts';
 
 /** Our demo number (555-01xx numbers are set aside for fiction). */
@@ -25,6 +26,8 @@ export interface Demo {
 
 export async function startDemo(opts: {
   ownerUrl: string;
+  /** The app role's address, for the care-plan clock (/dev/care-plans), which runs the job as the app does. */
+  appUrl?: string;
   dataDir: string;
   appOrigin: string;
   /** Where the SMS fake delivers its signed webhooks: this process. */
@@ -51,12 +54,15 @@ export async function startDemo(opts: {
   });
   const devPages = Router();
   devPages.use(devRouter(mailFake), devPhoneRouter(smsFake));
+  const appDb = opts.appUrl ? createDb(opts.appUrl, { max: 2 }) : undefined;
+  if (appDb) devPages.use(devCarePlansRouter(appDb));
   return {
     authSecret: opts.authSecret ?? secrets.authSecret,
     sms: { ...sms, fakeUrl: smsFake.url },
     mailFakePort: mailFake.port,
     devPages,
     async stop() {
+      await appDb?.$client.end();
       await smsFake.stop();
       await mailFake.stop();
     },

@@ -10,7 +10,8 @@ export function RequireSignedIn({ children }: { children: ReactNode }) {
   const me = useMe();
   const location = useLocation();
   if (me.isLoading) return <Loading />;
-  if (me.error) return <ErrorState error={me.error} onRetry={() => me.refetch()} />;
+  // With a saved copy (a phone offline, a dropped connection) the person is still known: keep their screens.
+  if (me.error && !me.data) return <ErrorState error={me.error} onRetry={() => me.refetch()} />;
   if (!me.data) return <Navigate to={`${paths.signIn}?next=${encodeURIComponent(location.pathname + location.search)}`} replace />;
   return <>{children}</>;
 }

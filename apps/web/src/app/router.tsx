@@ -9,6 +9,9 @@ import { Loading } from '../components/states.tsx';
 import { prefetchStartPage, StartPage } from './start-page.tsx';
 import { LandingPage } from '../features/home/landing-page.tsx';
 import { prefetchCalls } from '../features/calls/calls-queries.ts';
+import { prefetchRouteDays } from '../features/route-days/route-days-queries.ts';
+import { prefetchCarePlan, prefetchCarePlans } from '../features/care-plans/care-plans-queries.ts';
+import { prefetchWorkOrder, prefetchWorkOrders } from '../features/work-orders/work-orders-queries.ts';
 import { prefetchPartsList, prefetchPartsLists } from '../features/parts-lists/parts-lists-queries.ts';
 import { prefetchBoard, prefetchRecapDue } from '../features/boards/boards-queries.ts';
 import {
@@ -18,6 +21,9 @@ import {
   prefetchBenchTemplates,
   prefetchNewBenchJob,
 } from '../features/bench/bench-queries.ts';
+import { prefetchPart, prefetchParts } from '../features/parts/parts-queries.ts';
+import { prefetchReorder, prefetchStock, prefetchStockLocation } from '../features/stock/stock-queries.ts';
+import { prefetchVan } from '../features/van/van-queries.ts';
 import { NotFoundPage } from './not-found-page.tsx';
 import { RouteError } from './route-error.tsx';
 import { lazyPage } from './lazy-page.tsx';
@@ -63,6 +69,22 @@ const BoardPage = lazyPage(() => import('../features/boards/board-page.tsx').the
 const RecapDuePage = lazyPage(() => import('../features/boards/recap-due-page.tsx').then((m) => m.RecapDuePage));
 const PartsListsPage = lazyPage(() => import('../features/parts-lists/parts-lists-page.tsx').then((m) => m.PartsListsPage));
 const PartsListPage = lazyPage(() => import('../features/parts-lists/parts-list-page.tsx').then((m) => m.PartsListPage));
+const MyDayPage = lazyPage(() => import('../features/my-day/my-day-page.tsx').then((m) => m.MyDayPage));
+const MyStopPage = lazyPage(() => import('../features/my-day/stop-page.tsx').then((m) => m.StopPage));
+const MyChangesPage = lazyPage(() => import('../features/my-day/changes-page.tsx').then((m) => m.ChangesPage));
+const RouteDaysPage = lazyPage(() => import('../features/route-days/route-days-page.tsx').then((m) => m.RouteDaysPage));
+const PartsPage = lazyPage(() => import('../features/parts/parts-page.tsx').then((m) => m.PartsPage));
+const PartPage = lazyPage(() => import('../features/parts/part-page.tsx').then((m) => m.PartPage));
+const StockPage = lazyPage(() => import('../features/stock/stock-page.tsx').then((m) => m.StockPage));
+const StockLocationPage = lazyPage(() => import('../features/stock/stock-location-page.tsx').then((m) => m.StockLocationPage));
+const ReorderPage = lazyPage(() => import('../features/stock/reorder-page.tsx').then((m) => m.ReorderPage));
+const VanPage = lazyPage(() => import('../features/van/van-page.tsx').then((m) => m.VanPage));
+const CarePlansPage = lazyPage(() => import('../features/care-plans/care-plans-page.tsx').then((m) => m.CarePlansPage));
+const CarePlanPage = lazyPage(() => import('../features/care-plans/care-plan-page.tsx').then((m) => m.CarePlanPage));
+const NewCarePlanPage = lazyPage(() => import('../features/care-plans/care-plan-editor-page.tsx').then((m) => m.NewCarePlanPage));
+const EditCarePlanPage = lazyPage(() => import('../features/care-plans/care-plan-editor-page.tsx').then((m) => m.EditCarePlanPage));
+const WorkOrdersPage = lazyPage(() => import('../features/work-orders/work-orders-page.tsx').then((m) => m.WorkOrdersPage));
+const WorkOrderPage = lazyPage(() => import('../features/work-orders/work-order-page.tsx').then((m) => m.WorkOrderPage));
 
 /** A screen for those whose role has `permission` (the API checks the same table). */
 function guard(permission: Permission, page: ReactNode) {
@@ -140,6 +162,41 @@ export const router = createBrowserRouter([
             element: guard('calls:read', <CallPage />),
           },
           {
+            path: paths.carePlans,
+            element: guard('care-plans:read', <CarePlansPage />),
+            loader: prefetching(prefetchCarePlans, CarePlansPage.preload),
+          },
+          {
+            path: paths.newCarePlan,
+            element: guard('care-plans:write', <NewCarePlanPage />),
+            loader: prefetching(() => {}, NewCarePlanPage.preload),
+          },
+          {
+            path: '/care-plans/:id',
+            element: guard('care-plans:read', <CarePlanPage />),
+            loader: prefetching(prefetchCarePlan, CarePlanPage.preload),
+          },
+          {
+            path: '/care-plans/:id/edit',
+            element: guard('care-plans:write', <EditCarePlanPage />),
+            loader: prefetching(prefetchCarePlan, EditCarePlanPage.preload),
+          },
+          {
+            path: paths.workOrders,
+            element: guard('care-plans:read', <WorkOrdersPage />),
+            loader: prefetching(prefetchWorkOrders, WorkOrdersPage.preload),
+          },
+          {
+            path: '/work-orders/:id',
+            element: guard('care-plans:read', <WorkOrderPage />),
+            loader: prefetching(prefetchWorkOrder, WorkOrderPage.preload),
+          },
+          {
+            path: paths.routeDays,
+            element: guard('route-days:plan', <RouteDaysPage />),
+            loader: prefetching(prefetchRouteDays, RouteDaysPage.preload),
+          },
+          {
             path: paths.partsLists,
             element: guard('bench:read', <PartsListsPage />),
             loader: prefetching(prefetchPartsLists, PartsListsPage.preload),
@@ -195,6 +252,25 @@ export const router = createBrowserRouter([
             element: guard('bench-templates:write', <EditBenchTemplatePage />),
             loader: prefetching(prefetchBenchTemplate, EditBenchTemplatePage.preload),
           },
+          // The technician's phone: My day, a stop, and the changes not sent yet.
+          { path: paths.myDay, element: guard('route-days:read', <MyDayPage />), loader: prefetching(() => {}, MyDayPage.preload) },
+          {
+            path: paths.myStop(':venueId'),
+            element: guard('route-days:read', <MyStopPage />),
+            loader: prefetching(() => {}, MyStopPage.preload),
+          },
+          { path: paths.myChanges, element: <MyChangesPage />, loader: prefetching(() => {}, MyChangesPage.preload) },
+          // Parts catalogue, stocks, what to order, and the technician's van.
+          { path: paths.parts, element: guard('stock:read', <PartsPage />), loader: prefetching(prefetchParts, PartsPage.preload) },
+          { path: paths.part(':id'), element: guard('stock:read', <PartPage />), loader: prefetching(prefetchPart, PartPage.preload) },
+          { path: paths.stock, element: guard('stock:read', <StockPage />), loader: prefetching(prefetchStock, StockPage.preload) },
+          { path: paths.reorder, element: guard('stock:manage', <ReorderPage />), loader: prefetching(prefetchReorder, ReorderPage.preload) },
+          {
+            path: paths.stockLocation(':id'),
+            element: guard('stock:read', <StockLocationPage />),
+            loader: prefetching(prefetchStockLocation, StockLocationPage.preload),
+          },
+          { path: paths.vanStock, element: guard('stock:read', <VanPage />), loader: prefetching(prefetchVan, VanPage.preload) },
           {
             path: paths.settings,
             element: guard('settings:manage', <SettingsPage />),

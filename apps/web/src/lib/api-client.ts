@@ -24,7 +24,11 @@ function withQuery(path: string, query?: Query): string {
   return s ? `${path}?${s}` : path;
 }
 
-export async function api<T>(method: string, path: string, opts: { body?: unknown; query?: Query } = {}): Promise<T> {
+export async function api<T>(
+  method: string,
+  path: string,
+  opts: { body?: unknown; query?: Query; headers?: Record<string, string> } = {},
+): Promise<T> {
   let res: Response;
   // A FormData body (a photo) goes as multipart, with the boundary the browser sets.
   const form = opts.body instanceof FormData ? opts.body : null;
@@ -36,6 +40,7 @@ export async function api<T>(method: string, path: string, opts: { body?: unknow
         Accept: 'application/json',
         'X-Requested-With': 'bumperline',
         ...(opts.body !== undefined && !form ? { 'Content-Type': 'application/json' } : {}),
+        ...opts.headers,
       },
       body: form ?? (opts.body !== undefined ? JSON.stringify(opts.body) : undefined),
     });

@@ -50,6 +50,8 @@ export const paths = {
   /** The technician's own day (their home screen); the office's every-technician view on a map. */
   myDay: '/my-day',
   myStop: (venueId: string) => `/my-day/stops/${venueId}`,
+  /** The phone's changes not sent yet, and the ones the office turned down. */
+  myChanges: '/my-day/changes',
   routeDays: '/route-days',
   /** Parts catalogue, stocks, what to order; the technician's van. */
   parts: '/parts',

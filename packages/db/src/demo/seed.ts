@@ -16,6 +16,8 @@ import {
 } from '../schema/index.ts';
 import { seedCallHistory } from './call-history.ts';
 import { seedBench } from './bench.ts';
+import { seedCarePlans } from './care-plans.ts';
+import { seedStock } from './stock.ts';
 import { hashPassword } from '../passwords.ts';
 import {
   DEMO_PASSWORD,
@@ -97,7 +99,13 @@ export async function seedDemo(db: Db): Promise<boolean> {
         }),
       )
       .returning({ id: venues.id });
-    await tx.insert(tenantSettings).values([{ tenantId: demoCompany.id, dispatchPhone: '+13125550102' }, { tenantId: secondCompany.id }]);
+    // Labour at cost per hour on site (keep cost), and city driving between venues (route days).
+    await tx
+      .insert(tenantSettings)
+      .values([
+        { tenantId: demoCompany.id, dispatchPhone: '+13125550102', labourRateCents: 5200, averageSpeedKmh: 32 },
+        { tenantId: secondCompany.id },
+      ]);
     // Hollis speaks for the first venue.
     const [hollis] = await tx.select({ id: users.id }).from(users).where(eq(users.email, 'venue@lakeshore.example'));
     await tx.insert(venueContacts).values({ tenantId: demoCompany.id, venueId: venueRows[0]!.id, userId: hollis!.id });
@@ -132,8 +140,13 @@ export async function seedDemo(db: Db): Promise<boolean> {
       .select({ id: users.id })
       .from(users)
       .where(inArray(users.email, Object.keys(technicianProfiles)));
-    await seedCallHistory(tx, { tenantId: demoCompany.id, games: gameRows, technicianIds: techIds.map((t) => t.id), rand });
+    // One moment for everything relative to now: the demo's today is the day it is seeded.
+    const now = new Date();
+    await seedCallHistory(tx, { tenantId: demoCompany.id, games: gameRows, technicianIds: techIds.map((t) => t.id), rand, now });
     await seedBench(tx, { tenantId: demoCompany.id, games: gameRows, technicianIds: techIds.map((t) => t.id) });
+    // Care plans and their work orders (with the meters they read and the route days they fill), then parts and stock.
+    const { doneWorkOrders } = await seedCarePlans(tx, { tenantId: demoCompany.id, now, rand: seededRandom(20261204) });
+    await seedStock(tx, { tenantId: demoCompany.id, now, doneWorkOrders, rand: seededRandom(20261205) });
 
     // The second company: a few venues and games of its own.
     const [pv1, pv2, pv3] = await tx

@@ -225,7 +225,7 @@ export async function listReadingsOfBenchJob(tx: Tx, jobId: string) {
 export async function insertBenchJobPartsUsed(
   tx: Tx,
   jobId: string,
-  rows: readonly { partId: string | null; description: string; quantity: number }[],
+  rows: readonly { partId: string | null; description: string; quantity: number; cataloguePartId?: string | null }[],
 ) {
   if (rows.length === 0) return;
   await tx.insert(benchJobPartsUsed).values(rows.map((r) => ({ ...r, jobId, tenantId: sql`${currentTenant}` })));

@@ -264,6 +264,13 @@ export class CompanyBench {
     return board;
   }
 
+  /** Every parts-list entry of the company's boards (the catalogue's fits are matched against them). */
+  partsListEntries(): { id: string; kind: string; value: string; rating: string }[] {
+    return this.boards.flatMap((board) =>
+      board.design.parts.map((part, i) => ({ id: board.partIds[i]!, kind: part.kind, value: part.value, rating: part.rating })),
+    );
+  }
+
   /** The boards in one game, their cabinet profile, and what the bench did to them. */
   fitGame(game: BenchGame): void {
     const { dice } = this.ctx;

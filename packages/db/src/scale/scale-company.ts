@@ -8,6 +8,8 @@ import { openingHoursFor, streets } from '../demo/scenario.ts';
 import { textArray } from './copy-table.ts';
 import type { Dice } from './dice.ts';
 import { CompanyBench } from './scale-bench.ts';
+import { CompanyCare } from './scale-care.ts';
+import { CompanyStock } from './scale-stock.ts';
 import { companyName, metros, modelCatalogue, personName, skillsByKind, venueName, type ModelKind } from './scale-names.ts';
 import type { ScaleTables } from './scale-tables.ts';
 
@@ -38,6 +40,8 @@ export interface CompanyContext {
   dice: Dice;
   /** The bench's own draws (scale-bench.ts), so the rest of the data is the same with or without it. */
   benchDice: Dice;
+  /** Care plans, meters, stock and keep cost draw their own too (scale-care.ts, scale-stock.ts). */
+  careDice: Dice;
   now: number;
   passwordHash: string;
   /** Called after each game's calls, so held rows can be sent before they pile up. */
@@ -157,8 +161,10 @@ export async function generateCompany(plan: CompanyPlan, ctx: CompanyContext): P
     person(`tech${pad(i + 1, 2)}`, true, 'technician'),
   );
   const kinds = Object.keys(skillsByKind) as ModelKind[];
+  const technicianSkills = new Map<string, string[]>();
   for (const tech of technicians) {
     const skills = [...new Set([dice.pick(kinds), dice.pick(kinds)].flatMap((k) => skillsByKind[k]))];
+    technicianSkills.set(tech.id, skills);
     t.technicianProfiles.add({
       tenant_id: tenantId,
       user_id: tech.id,
@@ -177,12 +183,17 @@ export async function generateCompany(plan: CompanyPlan, ctx: CompanyContext): P
     technicians,
     dispatchPhone: (dispatchers[0] ?? owner).phone!,
   };
+  // Labour at cost and driving speed vary a little between companies (and metros).
+  const labourRateCents = ctx.careDice.int(38, 62) * 100;
+  const averageSpeedKmh = ctx.careDice.int(28, 45);
   t.tenantSettings.add({
     tenant_id: tenantId,
     response_targets: RESPONSE_TARGETS,
     warn_before_minutes: WARN_BEFORE_MINUTES,
     map_tile_url: '',
     dispatch_phone: company.dispatchPhone,
+    labour_rate_cents: labourRateCents,
+    average_speed_kmh: averageSpeedKmh,
   });
   for (let i = 0; i < (big ? 3 : dice.int(0, 1)); i++) {
     t.invitations.add({
@@ -263,6 +274,26 @@ export async function generateCompany(plan: CompanyPlan, ctx: CompanyContext): P
     plan.index === 0,
   );
 
+  const stock = new CompanyStock(
+    { tables: t, dice: ctx.careDice, now: ctx.now },
+    { tenantId, start, technicians, labourRateCents },
+    bench.partsListEntries(),
+    plan.index === 0,
+  );
+  const care = new CompanyCare(
+    { tables: t, dice: ctx.careDice, now: ctx.now },
+    {
+      tenantId,
+      start,
+      timeZone: metro.timeZone,
+      technicians: technicians.map((tech) => ({ id: tech.id, skills: technicianSkills.get(tech.id)! })),
+      dispatcherId: (dispatchers[0] ?? owner).id,
+      largest: plan.index === 0,
+    },
+    models,
+    stock,
+  );
+
   const serialPrefix = String.fromCharCode(65 + (plan.index % 26), 65 + (Math.floor(plan.index / 26) % 26));
   for (let g = 0; g < plan.games; g++) {
     const model = dice.pick(models);
@@ -319,11 +350,13 @@ export async function generateCompany(plan: CompanyPlan, ctx: CompanyContext): P
       const severity = severityFor(dice, problem);
       const until = dice.chance(0.04) ? 'cancelled' : 'closed';
       const steps = plotCall(dice, company, severity, until).map((s) => ({ ...s, at: s.at + at }));
-      writeCall(ctx, company, game, { opened: at, problem, severity, steps });
+      const call = writeCall(ctx, company, game, { opened: at, problem, severity, steps });
+      if (call.fixedAt !== null && call.technicianId !== null)
+        stock.callFixed({ id: call.id, gameId, technicianId: call.technicianId, problem, at: call.fixedAt });
       at = steps[steps.length - 1]!.at + dice.exponential(meanGap);
     }
     const openCallId = open
-      ? writeCall(ctx, company, game, { opened: open.opened, problem: openProblem, severity: openSeverity, steps: open.steps })
+      ? writeCall(ctx, company, game, { opened: open.opened, problem: openProblem, severity: openSeverity, steps: open.steps }).id
       : undefined;
     if (!retired) {
       bench.fitGame({
@@ -333,9 +366,12 @@ export async function generateCompany(plan: CompanyPlan, ctx: CompanyContext): P
         openCall: openCallId && openState ? { id: openCallId, state: openState } : undefined,
       });
     }
+    care.fitGame({ id: gameId, model, venueId: retired ? null : venue.id, installedAt, retiredAt });
     await ctx.afterGame();
   }
   bench.finish();
+  care.finish();
+  stock.finish();
   return tenantId;
 }
 
@@ -425,7 +461,7 @@ function writeCall(
   c: Company,
   game: { id: string; title: string; venue: Venue },
   call: { opened: number; problem: ProblemKind; severity: Severity; steps: Step[] },
-): string {
+): { id: string; technicianId: string | null; fixedAt: number | null } {
   const { tables: t, dice } = ctx;
   const id = dice.uuid();
   const steps = [...call.steps];
@@ -577,7 +613,7 @@ function writeCall(
       ended_at: dateOrNull(fixedAt ?? (state === 'cancelled' ? closedAt : null)),
     });
   }
-  return id;
+  return { id, technicianId, fixedAt };
 }
 
 function audit(

@@ -78,6 +78,7 @@ export async function seedScale(options: ScaleOptions & ScaleTarget): Promise<Sc
       tables,
       dice,
       benchDice: new Dice(seed + 1),
+      careDice: new Dice(seed + 2),
       now: (options.now ?? new Date()).getTime(),
       passwordHash: await hashPassword(SCALE_PASSWORD),
       async afterGame() {

@@ -6,7 +6,8 @@ import type { WallTime } from './zoned-time.ts';
 /**
  * The part of RFC 5545 §3.3.10 (RECUR) that care plans need: FREQ=DAILY/WEEKLY/MONTHLY/YEARLY, INTERVAL, BYDAY
  * (with ordinals such as 1MO or -1FR for monthly and yearly rules), BYMONTHDAY (including negatives: -1 is the last
- * day), BYMONTH, COUNT, UNTIL and WKST. Anything else is refused by name rather than ignored.
+ * day), BYMONTH, BYSETPOS (the nth of the period's matches: "the third weekday" is BYDAY=MO,TU,WE,TH,FR;BYSETPOS=3,
+ * RFC 5545 §3.8.5.3's examples), COUNT, UNTIL and WKST. Anything else is refused by name rather than ignored.
  */
 
 export type Frequency = 'DAILY' | 'WEEKLY' | 'MONTHLY' | 'YEARLY';
@@ -32,13 +33,15 @@ export interface RecurrenceRule {
   byDay: ByDay[];
   byMonthDay: number[];
   byMonth: number[];
+  /** Positions within each period's set of matches (1 = first, -1 = last); absent or empty = every match. */
+  bySetPos?: number[];
   count: number | null;
   until: Until | null;
   weekStart: Weekday;
 }
 
 const FREQUENCIES: readonly Frequency[] = ['DAILY', 'WEEKLY', 'MONTHLY', 'YEARLY'];
-const UNSUPPORTED = ['BYSETPOS', 'BYWEEKNO', 'BYYEARDAY', 'BYHOUR', 'BYMINUTE', 'BYSECOND'];
+const UNSUPPORTED = ['BYWEEKNO', 'BYYEARDAY', 'BYHOUR', 'BYMINUTE', 'BYSECOND'];
 
 function invalid(message: string, part?: string): never {
   throw new DomainError('invalid-rule', message, part ? `rule.${part}` : 'rule');
@@ -140,6 +143,9 @@ export function parseRecurrenceRule(text: string): RecurrenceRule {
       case 'BYMONTHDAY':
         rule.byMonthDay = integerList(value, name, 1, 31, true);
         break;
+      case 'BYSETPOS':
+        rule.bySetPos = integerList(value, name, 1, 366, true);
+        break;
       case 'BYDAY':
         rule.byDay = value.split(',').map((item) => {
           const m = /^([+-]?\d{1,2})?(MO|TU|WE|TH|FR|SA|SU)$/.exec(item);
@@ -183,6 +189,14 @@ export function validateRecurrenceRule(rule: RecurrenceRule): RecurrenceRule {
   }
   for (const m of rule.byMonth) {
     if (!Number.isInteger(m) || m < 1 || m > 12) invalid(`BYMONTH ${m} is outside 1…12`, 'BYMONTH');
+  }
+  const setPos = rule.bySetPos ?? [];
+  for (const n of setPos) {
+    if (!Number.isInteger(n) || n === 0 || Math.abs(n) > 366) invalid(`BYSETPOS ${n} is outside ±1…±366`, 'BYSETPOS');
+  }
+  // RFC 5545 §3.3.10: BYSETPOS "MUST only be used in conjunction with another BYxxx rule part".
+  if (setPos.length > 0 && rule.byDay.length + rule.byMonthDay.length + rule.byMonth.length === 0) {
+    invalid('BYSETPOS must be used with BYDAY, BYMONTHDAY or BYMONTH (RFC 5545)', 'BYSETPOS');
   }
   return rule;
 }

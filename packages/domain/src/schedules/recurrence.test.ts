@@ -432,7 +432,7 @@ describe('ranges and bad input', () => {
 
   it.each([
     ['FREQ=DAILY;COUNT=3;UNTIL=20250101T000000Z', 'invalid-rule'],
-    ['FREQ=MONTHLY;BYDAY=MO;BYSETPOS=-1', 'unsupported-rule-part'],
+    ['FREQ=MONTHLY;BYWEEKNO=1', 'unsupported-rule-part'],
     ['FREQ=HOURLY', 'unsupported-rule-part'],
     ['FREQ=WEEKLY;BYDAY=1MO', 'invalid-rule'],
     ['FREQ=WEEKLY;BYMONTHDAY=1', 'invalid-rule'],

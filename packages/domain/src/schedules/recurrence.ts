@@ -42,7 +42,13 @@ function plan(ruleInput: RecurrenceRule | string, start: RecurrenceStart): Plan 
   const timeZone = requireTimeZone(start?.timeZone);
   const startWall = parseWallTime(start.start);
   const startDay = epochDayFromParts(startWall.year, startWall.month, startWall.day);
-  const rule: RecurrenceRule = { ...parsed, byDay: [...parsed.byDay], byMonthDay: [...parsed.byMonthDay], byMonth: [...parsed.byMonth] };
+  const rule: RecurrenceRule = {
+    ...parsed,
+    byDay: [...parsed.byDay],
+    byMonthDay: [...parsed.byMonthDay],
+    byMonth: [...parsed.byMonth],
+    bySetPos: [...(parsed.bySetPos ?? [])],
+  };
 
   // RFC 5545 §3.3.10: missing parts are taken from DTSTART.
   if (rule.byDay.length === 0 && rule.byMonthDay.length === 0) {
@@ -138,6 +144,24 @@ function matches(p: Plan, day: EpochDay): boolean {
   return true;
 }
 
+/**
+ * The period's matching days in order; with BYSETPOS, only those at the given positions of that set (RFC 5545
+ * §3.3.10: BYSETPOS picks from the whole period's set, before occurrences ahead of DTSTART are dropped — as the
+ * rrule package does).
+ */
+function daysInSet(p: Plan, first: EpochDay, end: EpochDay): EpochDay[] {
+  const set: EpochDay[] = [];
+  for (let day = first; day < end; day++) if (matches(p, day)) set.push(day);
+  const positions = p.rule.bySetPos ?? [];
+  if (positions.length === 0) return set;
+  const picked = new Set<EpochDay>();
+  for (const n of positions) {
+    const day = n > 0 ? set[n - 1] : set[set.length + n];
+    if (day !== undefined) picked.add(day);
+  }
+  return [...picked].sort((a, b) => a - b);
+}
+
 function periodsPerYear(p: Plan): number {
   return { DAILY: 366, WEEKLY: 53, MONTHLY: 12, YEARLY: 1 }[p.rule.frequency];
 }
@@ -168,9 +192,9 @@ export function* iterateOccurrences(ruleInput: RecurrenceRule | string, start: R
   for (;;) {
     const [first, end] = daysOfPeriod(p, units);
     let found = false;
-    for (let day = first; day < end; day++) {
+    for (const day of daysInSet(p, first, end)) {
       if (day > LAST_DAY) return;
-      if (day < p.startDay || !matches(p, day)) continue;
+      if (day < p.startDay) continue;
       found = true;
       const { year, month, day: dom } = dateParts(day);
       const wall: WallTime = { year, month, day: dom, hour: p.startWall.hour, minute: p.startWall.minute, second: p.startWall.second };

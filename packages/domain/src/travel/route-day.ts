@@ -33,6 +33,11 @@ export interface RouteDayInput {
   /** Back at the start point by this time, if given. */
   dayEnd?: number;
   seed?: number;
+  /**
+   * Ruin-and-recreate rounds when the plain tour misses a window (default min(400, 40 + 10 per stop)): fewer answer
+   * sooner for a screen that re-plans on every look, at some cost in driving.
+   */
+  searchRounds?: number;
 }
 
 export interface Visit {
@@ -420,7 +425,10 @@ export function planRouteDay(input: RouteDayInput): RouteDayPlan {
     best = better(built, repaired) ? built : repaired;
 
     // Ruin and recreate: lift a few stops out and put them and any left-over stops back in a new order.
-    const rounds = Math.min(400, 40 + 10 * candidates.length);
+    const rounds =
+      input.searchRounds === undefined
+        ? Math.min(400, 40 + 10 * candidates.length)
+        : requireNonNegativeInteger(input.searchRounds, 'searchRounds');
     for (let r = 0; r < rounds && candidates.length > 1; r++) {
       const lift = 1 + randomInt(random, Math.max(1, Math.ceil(best.order.length * 0.3)));
       const removed = new Set(shuffled(best.order, random).slice(0, lift));
@@ -444,5 +452,47 @@ export function planRouteDay(input: RouteDayInput): RouteDayPlan {
     }
   }
   const plan = schedule(problem, best.order);
+  return { visits: plan.visits, unscheduled, returnAt: plan.returnAt, totalTravelMinutes: plan.travel, totalCost: plan.cost };
+}
+
+/**
+ * Times for stops visited in a given order (the one a dispatcher fixed), without reordering. A stop that cannot be
+ * reached inside its window, or after which the technician could not be back by the day's end, is left out and
+ * reported with the reason — the order of the others is kept and their times are walked on without it. `order`
+ * lists every stop's id exactly once.
+ */
+export function scheduleInOrder(input: RouteDayInput, order: readonly string[]): RouteDayPlan {
+  const problem = prepare(input);
+  const indexOf = new Map(problem.stops.map((stop, s) => [stop.id, s]));
+  if (!Array.isArray(order) || order.length !== problem.stops.length || new Set(order).size !== order.length) {
+    throw new DomainError('conflicting-input', `the order must list each of the ${problem.stops.length} stops once`, 'order');
+  }
+  const unscheduled: UnscheduledStop[] = [];
+  const kept: number[] = [];
+  let time = problem.dayStart;
+  let previous = 0;
+  for (const id of order) {
+    const s = indexOf.get(id);
+    if (s === undefined) throw new DomainError('conflicting-input', `the order names ${id}, which is not a stop of the day`, 'order');
+    const stop = problem.stops[s] as Problem['stops'][number];
+    const arrival = time + (problem.travel[previous]?.[s + 1] ?? 0);
+    if (arrival > stop.latest + EPS) {
+      unscheduled.push({
+        id,
+        reason: `in this order it would arrive at ${clock(arrival)}, after the last arrival at ${clock(stop.latest)}`,
+      });
+      continue;
+    }
+    const departure = Math.max(arrival, stop.earliest) + stop.serviceMinutes;
+    const back = departure + (problem.travel[s + 1]?.[0] ?? 0);
+    if (back > problem.dayEnd + EPS) {
+      unscheduled.push({ id, reason: `in this order the day would end at ${clock(back)}, after ${clock(problem.dayEnd)}` });
+      continue;
+    }
+    kept.push(s);
+    time = departure;
+    previous = s + 1;
+  }
+  const plan = schedule(problem, kept);
   return { visits: plan.visits, unscheduled, returnAt: plan.returnAt, totalTravelMinutes: plan.travel, totalCost: plan.cost };
 }

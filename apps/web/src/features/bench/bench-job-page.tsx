@@ -360,6 +360,7 @@ function StepCard({
         {step.record === 'parts_used' && (
           <PartsUsedRecord
             partsUsed={draft.partsUsed}
+            boardInstanceId={job.boardInstanceId}
             boardParts={boardParts}
             stepParts={parts}
             readOnly={readOnly}
@@ -418,6 +419,7 @@ function FinishCard({
           <h3 className="font-bold">Parts used</h3>
           <PartsUsedRecord
             partsUsed={draft.partsUsed}
+            boardInstanceId={job.boardInstanceId}
             boardParts={boardParts}
             stepParts={[]}
             readOnly={readOnly}

@@ -5,6 +5,9 @@ import { Plus, Trash2 } from 'lucide-react';
 import type { BenchJobDraft, BenchPartUsed } from '@bumperline/contracts/bench-vocabulary';
 import { partKindLabels } from '@bumperline/contracts/bench-vocabulary';
 import { inputClass } from '../../components/field.tsx';
+import { useQuery } from '@tanstack/react-query';
+import { boardPageQuery } from '../../api/boards.ts';
+import { useBoardCatalogueFits } from '../../api/parts-catalogue.ts';
 import type { JobPart } from './job-parts.ts';
 import { setPartsUsed } from './draft.ts';
 import { fieldDomId } from './field-problems.ts';
@@ -16,7 +19,10 @@ export function PartsUsedRecord({
   readOnly,
   problems,
   edit,
+  boardInstanceId,
 }: {
+  /** The job's board: its parts-list entries' catalogue parts come off the finisher's van when the job is finished. */
+  boardInstanceId?: string;
   partsUsed: readonly BenchPartUsed[];
   /** Every part on the board's parts list. */
   boardParts: readonly JobPart[];
@@ -31,6 +37,10 @@ export function PartsUsedRecord({
   const change = (list: BenchPartUsed[]) => edit((d) => setPartsUsed(d, list));
   const update = (i: number, value: Partial<BenchPartUsed>) => change(partsUsed.map((u, j) => (j === i ? { ...u, ...value } : u)));
   const selectable = (stepParts.length ? stepParts : boardParts).filter((p) => !p.line.removed);
+  // The catalogue part linked to each entry (the first, when several fit), with how many are on the van.
+  const board = useQuery({ ...boardPageQuery(boardInstanceId ?? ''), enabled: !!boardInstanceId });
+  const fits = useBoardCatalogueFits(boardInstanceId ? board.data?.instance.boardId : undefined);
+  const fitOf = (boardPartId: string) => fits.data?.items.find((f) => f.boardPartId === boardPartId);
 
   return (
     <div className="grid gap-3">
@@ -68,6 +78,9 @@ export function PartsUsedRecord({
               {selectable.map((p) => (
                 <option key={p.id} value={p.id}>
                   {p.line.designator} — {p.line.value} ({partKindLabels[p.line.kind].toLowerCase()})
+                  {fitOf(p.id)
+                    ? ` · ${fitOf(p.id)!.partNumber}${fitOf(p.id)!.vanQuantity !== null ? `, ${fitOf(p.id)!.vanQuantity} on your van` : ''}`
+                    : ''}
                 </option>
               ))}
             </select>
@@ -78,7 +91,16 @@ export function PartsUsedRecord({
               onClick={() => {
                 const part = selectable.find((p) => p.id === picked);
                 if (!part) return;
-                change([...partsUsed, { partId: part.id, description: `${part.line.designator} ${part.line.value}`, quantity: 1 }]);
+                const fit = fitOf(part.id);
+                change([
+                  ...partsUsed,
+                  {
+                    partId: part.id,
+                    description: `${part.line.designator} ${part.line.value}`,
+                    quantity: 1,
+                    cataloguePartId: fit?.cataloguePartId ?? null,
+                  },
+                ]);
                 setPicked('');
               }}
             >
@@ -129,6 +151,7 @@ function PartUsedLine({
         <label htmlFor={descriptionId} className="text-sm font-semibold">
           Part {index + 1}
           {used.partId ? ' (from the parts list)' : ''}
+          {used.cataloguePartId ? ' — comes off your van when the job is finished' : ''}
         </label>
         <input
           id={descriptionId}

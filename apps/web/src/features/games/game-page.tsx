@@ -6,6 +6,8 @@ import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { GameStatusBadge } from '../../components/game-status-badge.tsx';
 import { ActivitySection } from '../../components/activity-section.tsx';
 import { BoardsSection } from '../../components/boards-section.tsx';
+import { WorkOrdersSection } from '../../components/work-orders-section.tsx';
+import { GameCareSection } from '../../components/game-care-section.tsx';
 import { paths } from '../../lib/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings } from '../../api/me.ts';
@@ -27,6 +29,7 @@ export function GamePage() {
   const retire = useRetireGame(id);
   const locale = useLocaleSettings();
   const canReadBench = useCan('bench:read');
+  const canReadCare = useCan('care-plans:read');
 
   if (game.isLoading) return <Loading />;
   if (game.error || !game.data) return <ErrorState error={game.error} onRetry={() => game.refetch()} />;
@@ -103,6 +106,8 @@ export function GamePage() {
         </section>
         <GameCalls gameId={g.id} title={g.model.title} canReport={!g.retiredAt} />
         {canReadBench && <BoardsSection gameId={g.id} modelTitle={g.model.title} canFit={!g.retiredAt} />}
+        {canReadCare && <WorkOrdersSection gameId={g.id} />}
+        {canReadCare && <GameCareSection gameId={g.id} />}
         <Downtime gameId={g.id} />
         <ActivitySection entityId={g.id} title="Changes" />
       </div>

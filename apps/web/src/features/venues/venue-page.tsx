@@ -5,6 +5,7 @@ import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { GameStatusBadge } from '../../components/game-status-badge.tsx';
 import { ActivitySection } from '../../components/activity-section.tsx';
 import { VenueContactsSection } from './venue-contacts-section.tsx';
+import { WorkOrdersSection } from '../../components/work-orders-section.tsx';
 import { paths } from '../../lib/paths.ts';
 import { useCan } from '../../api/use-can.ts';
 import { useLocaleSettings } from '../../api/me.ts';
@@ -19,6 +20,7 @@ export function VenuePage() {
   const venue = useVenue(id);
   const games = useGames({ venueId: id, limit: 200, sort: 'title', order: 'asc' });
   const canWrite = useCan('venues:write');
+  const canReadCare = useCan('care-plans:read');
   const retire = useRetireVenue(id);
   const locale = useLocaleSettings();
 
@@ -121,6 +123,7 @@ export function VenuePage() {
         <div className="lg:col-span-3">
           <VenueContactsSection venueId={v.id} />
         </div>
+        {canReadCare && <WorkOrdersSection venueId={v.id} />}
         <ActivitySection entityId={v.id} title="Activity" />
       </div>
     </>
