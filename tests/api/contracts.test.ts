@@ -644,15 +644,12 @@ const endpoints: Record<string, Endpoint> = {
     status: 201,
     answer: stockChange,
     probe: (a) =>
-      a
-        .post('/api/stock/transfer')
-        .set(JSON_HEADERS)
-        .send({
-          cataloguePartId: company.care.cataloguePartId,
-          fromLocationId: company.care.warehouseId,
-          toLocationId: company.care.vanId,
-          quantity: 1,
-        }),
+      a.post('/api/stock/transfer').set(JSON_HEADERS).send({
+        cataloguePartId: company.care.cataloguePartId,
+        fromLocationId: company.care.warehouseId,
+        toLocationId: company.care.vanId,
+        quantity: 1,
+      }),
   },
   'POST /api/stock/count': {
     as: 'technician',

@@ -159,6 +159,27 @@ describe('keep cost', () => {
   });
 });
 
+describe('keep cost of a fixed service call', () => {
+  it('is written when the call is fixed: labour from arrival on site to the fix, parts at cost', async () => {
+    const id = company.assignedCallId;
+    const move = async (to: string) => {
+      const current = (await technician.get(`/api/calls/${id}`).expect(200)).body.call as { version: number };
+      await technician.post(`/api/calls/${id}/transition`).set(JSON_HEADERS).send({ to, version: current.version }).expect(200);
+    };
+    await move('on_the_way');
+    await move('on_site');
+    // Arrived 50 minutes ago, as the timeline will say.
+    await t.db.owner.execute(sql`update call_events set at = now() - interval '50 minutes' where call_id = ${id} and to_state = 'on_site'`);
+    await move('fixed');
+    const row = await t.db.owner.execute<{ minutes: number; labour: number; parts: number }>(
+      sql`select labour_minutes as minutes, labour_cents::int as labour, parts_cents::int as parts from keep_cost_entries where source = 'service_call' and source_id = ${id}`,
+    );
+    expect(row.rows).toHaveLength(1);
+    // 50 minutes at the default $45.00 an hour = 3,750 ¢; no parts recorded on this call.
+    expect(row.rows[0]).toEqual({ minutes: 50, labour: 3750, parts: 0 });
+  });
+});
+
 describe('who may, and other companies', () => {
   it('keeps the venue contact out and answers 404 for another company’s game', async () => {
     await venueContact.post(`/api/games/${gameId}/meter-readings`).set(JSON_HEADERS).send({ meter: 'plays', reading: 200 }).expect(403);

@@ -633,15 +633,12 @@ const routes: Record<string, RouteCase> = {
     ok: 201,
     // Warehouse → the technician's van: the one move every role with the permission may make.
     probe: (c) =>
-      c.agent
-        .post('/api/stock/transfer')
-        .set(JSON_HEADERS)
-        .send({
-          cataloguePartId: company.care.cataloguePartId,
-          fromLocationId: company.care.warehouseId,
-          toLocationId: company.care.vanId,
-          quantity: 1,
-        }),
+      c.agent.post('/api/stock/transfer').set(JSON_HEADERS).send({
+        cataloguePartId: company.care.cataloguePartId,
+        fromLocationId: company.care.warehouseId,
+        toLocationId: company.care.vanId,
+        quantity: 1,
+      }),
   },
   'POST /api/stock/count': {
     access: 'stock:move',

@@ -48,4 +48,14 @@ describe('settings', () => {
     ).rows as { minutes: number }[];
     expect(Number(c!.minutes)).toBe(90);
   });
+
+  it('the owner sets the labour rate and driving speed; an impossible speed is refused by field and changes nothing', async () => {
+    const before = (await owner.get('/api/settings').expect(200)).body;
+    const bad = await owner.patch('/api/settings').set(JSON_HEADERS).send({ labourRateCents: 6000, averageSpeedKmh: 400 }).expect(400);
+    expect(bad.body.errors.map((e: { field: string }) => e.field)).toEqual(['averageSpeedKmh']);
+    expect((await owner.get('/api/settings').expect(200)).body.labourRateCents).toBe(before.labourRateCents);
+    await owner.patch('/api/settings').set(JSON_HEADERS).send({ labourRateCents: 6000, averageSpeedKmh: 40 }).expect(200);
+    const after = (await owner.get('/api/settings').expect(200)).body;
+    expect([after.labourRateCents, after.averageSpeedKmh]).toEqual([6000, 40]);
+  });
 });

@@ -10,8 +10,9 @@ const chicagoToday = () => new Intl.DateTimeFormat('en-CA', { timeZone: 'America
 
 test('a dispatcher plans care for the last Tuesday of each month, and its work order falls due', async ({ page }) => {
   const consoleClean = failOnConsoleErrors(page);
+  // A server error fails the test through the console check; its address is printed to say which request.
   page.on('response', (r) => {
-    if (r.status() >= 500) console.log('FAILED', r.url());
+    if (r.status() >= 500) console.log(`server error ${r.status()} on ${r.url()}`);
   });
   const name = `Glass and coin-door clean ${Date.now().toString(36)}`;
   await signIn(page, demo.dispatcher);

@@ -12,7 +12,8 @@ const PHONE = { width: 390, height: 844 };
 const JSON_HEADERS = { 'X-Requested-With': 'bumperline', 'Content-Type': 'application/json' };
 
 async function technicianPhone(browser: Browser): Promise<Page> {
-  const context = await browser.newContext({ viewport: PHONE });
+  // The service worker serves the app shell offline (the config blocks it for the other suites).
+  const context = await browser.newContext({ viewport: PHONE, serviceWorkers: 'allow' });
   const page = await context.newPage();
   await signIn(page, demo.technician);
   await expect(page).toHaveURL(/\/my-day$/);

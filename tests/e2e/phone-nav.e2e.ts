@@ -22,7 +22,7 @@ const roles = [
 
 for (const role of roles) {
   test(`${role.who}: the phone's bars fit 390 px, targets are large, More opens every section`, async ({ browser }) => {
-    const context = await browser.newContext({ viewport: PHONE });
+    const context = await browser.newContext({ viewport: PHONE, serviceWorkers: 'block' });
     const page = await context.newPage();
     await signIn(page, role.email);
     await expect(page).toHaveURL(role.home);
@@ -55,7 +55,7 @@ for (const role of roles) {
 }
 
 test('the dim theme: chosen on the phone, remembered after a reload, and it passes axe like the light one', async ({ browser }) => {
-  const context = await browser.newContext({ viewport: PHONE });
+  const context = await browser.newContext({ viewport: PHONE, serviceWorkers: 'block' });
   const page = await context.newPage();
   await signIn(page, demo.technician);
   await page.waitForLoadState('networkidle');
@@ -72,7 +72,7 @@ test('the dim theme: chosen on the phone, remembered after a reload, and it pass
 });
 
 test("the phone's own dark setting picks the dim theme until a choice is made", async ({ browser }) => {
-  const context = await browser.newContext({ viewport: PHONE, colorScheme: 'dark' });
+  const context = await browser.newContext({ viewport: PHONE, colorScheme: 'dark', serviceWorkers: 'block' });
   const page = await context.newPage();
   await signIn(page, demo.owner);
   await expect(page.locator('html')).toHaveAttribute('data-theme', 'dim');

@@ -29,6 +29,9 @@ export default defineConfig({
       ],
     },
     screenshot: 'only-on-failure',
+    // The app's service worker precaches every bundle on a fresh context; only the offline suites need it
+    // (my-day.e2e.ts allows it), the others would pay for it on every test.
+    serviceWorkers: 'block',
     trace: 'off',
   },
   webServer: {

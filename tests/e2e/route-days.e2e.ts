@@ -98,14 +98,17 @@ test('dispatcher reorders a technician’s stops by dragging, the times re-plan,
 
   // The same by keyboard: space lifts the second stop, the up arrow moves it, space drops it.
   const planned = await venueOrder(column);
-  await column
+  const keyHandle = column
     .getByTestId('route-stop')
     .nth(1)
-    .getByRole('button', { name: /^Drag / })
-    .focus();
-  await page.keyboard.press('Space');
-  await page.keyboard.press('ArrowUp');
-  await page.keyboard.press('Space');
+    .getByRole('button', { name: /^Drag / });
+  await expect(keyHandle).toBeEnabled();
+  await keyHandle.focus();
+  // A beat between keys, as a person gives: the lifted card is measured before it can move.
+  for (const key of ['Space', 'ArrowUp', 'Space']) {
+    await page.keyboard.press(key);
+    await page.waitForTimeout(250);
+  }
   await expect(column.getByTestId('order-kind')).toHaveText('Order kept by the office');
   await expect.poll(async () => (await venueOrder(column))[0]).toBe(planned[1]);
   await column.getByRole('button', { name: 'Use the planner’s order' }).click();

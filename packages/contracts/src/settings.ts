@@ -1,4 +1,5 @@
-// The company's dispatch settings: response targets per severity, warning lead, map tiles, dispatch phone.
+// The company's settings: response targets per severity, warning lead, map tiles, dispatch phone; the labour rate
+// keep cost uses and the driving speed route days plan with.
 import { z } from 'zod';
 import { uuid } from './common.ts';
 import { phoneNumber } from './phone.ts';
@@ -27,6 +28,10 @@ export const settingsUpdate = z.strictObject({
     ])
     .optional(),
   dispatchPhone: z.union([z.literal(''), phoneNumber]).optional(),
+  /** Labour at cost per hour on site, in cents: keep cost prices a job's time with it. */
+  labourRateCents: z.number().int().min(0, { error: 'must not be negative' }).max(1_000_000).optional(),
+  /** Average driving speed between venues, for route days. */
+  averageSpeedKmh: z.number().int().min(5, { error: 'must be at least 5 km/h' }).max(130, { error: 'must be at most 130 km/h' }).optional(),
 });
 export type SettingsUpdate = z.input<typeof settingsUpdate>;
 
@@ -38,5 +43,7 @@ export const companySettings = z.strictObject({
   /** Empty: no tiles are fetched, the map shows markers on a plain background. */
   mapTileUrl: z.string(),
   dispatchPhone: z.string(),
+  labourRateCents: z.number().int(),
+  averageSpeedKmh: z.number().int(),
 });
 export type CompanySettings = z.infer<typeof companySettings>;

@@ -177,31 +177,36 @@ function MenuSheet({ open, onClose, groups }: { open: boolean; onClose: () => vo
       onClose={onClose}
       className="m-0 ml-auto h-dvh max-h-dvh w-[min(22rem,100vw)] max-w-none overflow-y-auto bg-paper-dim p-0 text-ink backdrop:bg-black/50"
     >
-      <div className="sticky top-0 z-10 flex items-center justify-between gap-2 bg-bar px-4 py-2 text-bar-text">
-        <span className="text-lg font-extrabold">Menu</span>
-        <button
-          type="button"
-          onClick={onClose}
-          className="inline-flex min-h-12 min-w-12 items-center justify-center gap-1 rounded-md border border-bar-text/40 px-3 font-semibold"
-        >
-          <X aria-hidden className="size-5" /> Close
-        </button>
-      </div>
-      <div className="grid gap-5 p-4">
-        <div className="grid gap-3 rounded-lg bg-bar p-3 text-bar-text">
-          <p className="font-semibold">
-            {me.data?.user.name} · {role ? roleLabels[role] : ''}
-          </p>
-          <CompanySwitcher />
-          <div className="flex flex-wrap gap-2">
-            <ThemeToggle />
-            <SignOutButton className="border-bar-text/40 hover:bg-bar-text/10" />
+      {/* Rendered only while open: a closed sheet holds no second copy of the company name or the links. */}
+      {open && (
+        <>
+          <div className="sticky top-0 z-10 flex items-center justify-between gap-2 bg-bar px-4 py-2 text-bar-text">
+            <span className="text-lg font-extrabold">Menu</span>
+            <button
+              type="button"
+              onClick={onClose}
+              className="inline-flex min-h-12 min-w-12 items-center justify-center gap-1 rounded-md border border-bar-text/40 px-3 font-semibold"
+            >
+              <X aria-hidden className="size-5" /> Close
+            </button>
           </div>
-        </div>
-        <nav aria-label="All sections">
-          <GroupedLinks groups={groups} onPick={onClose} />
-        </nav>
-      </div>
+          <div className="grid gap-5 p-4">
+            <div className="grid gap-3 rounded-lg bg-bar p-3 text-bar-text">
+              <p className="font-semibold">
+                {me.data?.user.name} · {role ? roleLabels[role] : ''}
+              </p>
+              <CompanySwitcher />
+              <div className="flex flex-wrap gap-2">
+                <ThemeToggle />
+                <SignOutButton className="border-bar-text/40 hover:bg-bar-text/10" />
+              </div>
+            </div>
+            <nav aria-label="All sections">
+              <GroupedLinks groups={groups} onPick={onClose} />
+            </nav>
+          </div>
+        </>
+      )}
     </dialog>
   );
 }

@@ -264,7 +264,11 @@ export const router = createBrowserRouter([
           { path: paths.parts, element: guard('stock:read', <PartsPage />), loader: prefetching(prefetchParts, PartsPage.preload) },
           { path: paths.part(':id'), element: guard('stock:read', <PartPage />), loader: prefetching(prefetchPart, PartPage.preload) },
           { path: paths.stock, element: guard('stock:read', <StockPage />), loader: prefetching(prefetchStock, StockPage.preload) },
-          { path: paths.reorder, element: guard('stock:manage', <ReorderPage />), loader: prefetching(prefetchReorder, ReorderPage.preload) },
+          {
+            path: paths.reorder,
+            element: guard('stock:manage', <ReorderPage />),
+            loader: prefetching(prefetchReorder, ReorderPage.preload),
+          },
           {
             path: paths.stockLocation(':id'),
             element: guard('stock:read', <StockLocationPage />),

@@ -54,6 +54,9 @@ export default function RouteDaysMap({ routes, tileUrl, label }: { routes: Mappe
         minZoom={3}
         maxZoom={18}
         scrollWheelZoom={false}
+        // Attribution is owed to a tile server's data; without tiles there is nothing to credit (and its small link
+        // would sit under the note below).
+        attributionControl={showTiles}
         className="h-96 w-full rounded-lg"
         style={{ background: '#e8ecf3' }}
       >

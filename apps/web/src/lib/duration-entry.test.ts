@@ -60,3 +60,15 @@ describe('lead in days', () => {
     expect(readDays(formatDays(7))).toEqual({ ok: true, value: 7 });
   });
 });
+
+describe('durations in days', () => {
+  it('reads "3 days" and "1 day" as 24-hour days and says them back the same way', () => {
+    expect(readMinutes('3 days', { max: 30 * 24 * 60 })).toEqual({ ok: true, value: 4320 });
+    expect(readMinutes('1 day', { max: 30 * 24 * 60 })).toEqual({ ok: true, value: 1440 });
+    expect(formatMinutes(4320)).toBe('3 days');
+    expect(formatMinutes(1500)).toBe('25 h');
+  });
+  it('keeps the upper bound in days', () => {
+    expect(readMinutes('31 days', { max: 30 * 24 * 60 })).toMatchObject({ ok: false });
+  });
+});

@@ -27,7 +27,12 @@ export function readMinutes(input: string, bounds: { min?: number; max?: number 
   const both = new RegExp(`^(\\S+?) ?${HOURS} ?(\\d+)(?: ?${MINUTES})?$`).exec(text);
   const hoursOnly = new RegExp(`^(\\S+?) ?${HOURS}$`).exec(text);
   const minutesOnly = new RegExp(`^(\\S+?)(?: ?${MINUTES})?$`).exec(text);
-  if (clock) minutes = Number(clock[1]) * 60 + Number(clock[2]);
+  const days = /^(\S+?) ?(?:d|day|days)$/.exec(text);
+  if (days) {
+    // Response targets run to days ("3 days"); a day here is 24 hours on the clock.
+    const d = readNumber(days[1]!);
+    if (d !== null) minutes = d * 24 * 60;
+  } else if (clock) minutes = Number(clock[1]) * 60 + Number(clock[2]);
   else if (both) {
     const h = readNumber(both[1]!);
     const m = readNumber(both[2]!);
@@ -60,8 +65,10 @@ export function readDays(input: string, bounds: { min?: number; max?: number } =
   return { ok: true, value: days };
 }
 
-/** Minutes as people say them back: "45 min", "1 h", "1 h 30 min". */
+/** Minutes as people say them back: "45 min", "1 h", "1 h 30 min", "3 days". */
 export function formatMinutes(minutes: number): string {
+  // Two days and more read better in days ("3 days"); a single day stays "24 h", as people say it of a deadline.
+  if (minutes >= 2 * 24 * 60 && minutes % (24 * 60) === 0) return formatDays(minutes / (24 * 60));
   const h = Math.floor(minutes / 60);
   const m = minutes % 60;
   if (h === 0) return `${m} min`;

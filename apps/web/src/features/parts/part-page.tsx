@@ -109,8 +109,8 @@ export function PartPage() {
                 <tr className="text-left text-sm text-ink-soft">
                   <th className="py-1">Stock</th>
                   <th className="py-1 text-right">Held</th>
-                  <th className="py-1 text-right">Reorder at</th>
-                  <th className="py-1">State</th>
+                  <th className="px-2 py-1 text-right">Reorder at</th>
+                  <th className="px-2 py-1">State</th>
                 </tr>
               </thead>
               <tbody>
@@ -122,8 +122,8 @@ export function PartPage() {
                       </Link>
                     </td>
                     <td className="py-2 text-right">{formatQuantity(h.quantity, part.unit)}</td>
-                    <td className="py-2 text-right">{h.reorderPoint === null ? '—' : formatQuantity(h.reorderPoint, part.unit)}</td>
-                    <td className="py-2">
+                    <td className="px-2 py-2 text-right">{h.reorderPoint === null ? '—' : formatQuantity(h.reorderPoint, part.unit)}</td>
+                    <td className="px-2 py-2">
                       <StockLevelBadge quantity={h.quantity} reorderPoint={h.reorderPoint} />
                     </td>
                   </tr>
