@@ -2,13 +2,17 @@
 // lead), exactly once. It is state-based — each run looks at every active plan past its next check and asks, per
 // game, "is work due and is none open?" — so a run missed while the API was down is made up by the next one (and
 // at start-up). The partial unique index on open work orders makes the insert happen once on any number of
-// instances; the plan's next check then moves to the earliest moment one of its games may need work.
+// instances; the plan's next check then moves to the earliest moment one of its games may need work. Each new work
+// order goes on the first of its technician's days with room for its time on site (day-capacity.ts).
 import type { Logger } from 'pino';
 import { withScope, type Db, type Tx } from '@bumperline/db/client';
 import { listCarePlansToCheck, listGamesOfCarePlan, setCarePlanNextCheck, type CarePlanRow } from '@bumperline/db/queries/care-plans';
 import { listCompaniesWithCarePlansToCheck } from '@bumperline/db/queries/due-work';
 import { listTechnicians } from '@bumperline/db/queries/technicians';
-import { insertWorkOrderOnce, listGamesWithOpenWorkOrder } from '@bumperline/db/queries/work-orders';
+import { insertWorkOrderOnce, listBookedWorkMinutes, listGamesWithOpenWorkOrder } from '@bumperline/db/queries/work-orders';
+import { listRouteTechnicians } from '@bumperline/db/queries/route-days';
+import { firstDayWithRoom, onSiteCapacityMinutes } from '@bumperline/domain/schedules/day-capacity';
+import { formatPlainDate, parsePlainDate } from '@bumperline/domain/plain-date';
 import { rankTechnicians } from '@bumperline/domain/travel/technician-ranking';
 import { dueOfPlanGames } from '../services/care-due-of-games.ts';
 import { companyZone } from '../services/care-plans.ts';
@@ -51,6 +55,7 @@ async function runCompany(tx: Tx, tenantId: string, now: Date): Promise<{ plans:
   const plans = await listCarePlansToCheck(tx, now);
   let created = 0;
   let technicians: Awaited<ReturnType<typeof listTechnicians>> | undefined;
+  let booking: DayBooking | undefined;
   for (const plan of plans) {
     const { games } = await listGamesOfCarePlan(tx, plan, GAMES_PER_PLAN);
     const open = await listGamesWithOpenWorkOrder(tx, plan.id);
@@ -71,6 +76,12 @@ async function runCompany(tx: Tx, tenantId: string, now: Date): Promise<{ plans:
         continue;
       }
       technicians ??= await listTechnicians(tx);
+      booking ??= await dayBooking(tx, now, timeZone);
+      const technicianId = plan.technicianId ?? nearestTechnician(plan, game, technicians);
+      // Overdue work from today, other work from the day it falls due (the company's local dates); then the first of
+      // the technician's days with room for it, so a backlog spreads over the coming days instead of piling on one.
+      const earliest = dateInZone(timeZone, due.dueAt <= now ? now : due.dueAt);
+      const plannedOn = technicianId ? booking.place(technicianId, earliest, plan.onSiteMinutes) : earliest;
       const id = await insertWorkOrderOnce(tx, {
         carePlanId: plan.id,
         gameId: game.id,
@@ -81,15 +92,47 @@ async function runCompany(tx: Tx, tenantId: string, now: Date): Promise<{ plans:
         benchTemplateId: plan.benchTemplateId,
         skills: plan.skills,
         onSiteMinutes: plan.onSiteMinutes,
-        technicianId: plan.technicianId ?? nearestTechnician(plan, game, technicians),
-        // Overdue work goes on today; other work on the day it falls due (the company's local dates).
-        plannedOn: dateInZone(timeZone, due.dueAt <= now ? now : due.dueAt),
+        technicianId,
+        plannedOn,
       });
-      if (id) created++;
+      if (id) {
+        created++;
+        if (technicianId) booking.book(technicianId, plannedOn, plan.onSiteMinutes);
+      }
     }
     await setCarePlanNextCheck(tx, plan.id, new Date(Math.max(nextCheck, now.getTime() + 60_000)));
   }
   return { plans: plans.length, created };
+}
+
+/** How far ahead new work may be spread. */
+const BOOKING_HORIZON_DAYS = 14;
+
+interface DayBooking {
+  /** The first day from `earliest` with room on the technician's day for `minutes` on site. */
+  place(technicianId: string, earliest: string, minutes: number): string;
+  book(technicianId: string, day: string, minutes: number): void;
+}
+
+/** The time on site already booked on each technician's coming days, and what each day can hold (day-capacity.ts). */
+async function dayBooking(tx: Tx, now: Date, timeZone: string): Promise<DayBooking> {
+  const today = dateInZone(timeZone, now);
+  const lastDay = formatPlainDate(parsePlainDate(today) + 400); // work due up to a year ahead (lead days) is placed too
+  const booked = await listBookedWorkMinutes(tx, { fromDay: today, toDay: lastDay });
+  const capacity = new Map(
+    (await listRouteTechnicians(tx, { day: today })).map((t) => [t.id, onSiteCapacityMinutes(t.dayStart, t.dayEnd)]),
+  );
+  return {
+    place: (technicianId, earliest, minutes) =>
+      firstDayWithRoom({
+        from: earliest,
+        needMinutes: minutes,
+        capacityMinutes: capacity.get(technicianId) ?? onSiteCapacityMinutes('08:00', '17:00'),
+        booked: (day) => booked.get(`${technicianId}|${day}`) ?? 0,
+        horizonDays: BOOKING_HORIZON_DAYS,
+      }),
+    book: (technicianId, day, minutes) => booked.set(`${technicianId}|${day}`, (booked.get(`${technicianId}|${day}`) ?? 0) + minutes),
+  };
 }
 
 /** Without a usual technician: the nearest technician with the plan's skills (technician-ranking.ts); null if none. */

@@ -188,3 +188,27 @@ export async function listLastClosedWorkOrders(tx: Tx, carePlanId: string) {
     .orderBy(workOrders.gameId, sql`${workOrders.closedAt} desc`);
   return new Map(rows.map((r) => [r.gameId, r]));
 }
+
+/**
+ * Time on site already booked on open work orders, per technician and day from `fromDay` to `toDay` (keys
+ * "technicianId|YYYY-MM-DD"): the care-plan run spreads new work by it. Read from the open-work partial index.
+ */
+export async function listBookedWorkMinutes(tx: Tx, p: { fromDay: string; toDay: string }): Promise<Map<string, number>> {
+  const rows = await tx
+    .select({
+      technicianId: workOrders.technicianId,
+      day: workOrders.plannedOn,
+      minutes: sql<number>`sum(${workOrders.onSiteMinutes})::int`,
+    })
+    .from(workOrders)
+    .where(
+      and(
+        eq(workOrders.tenantId, currentTenant),
+        eq(workOrders.state, 'open'),
+        isNotNull(workOrders.technicianId),
+        sql`${workOrders.plannedOn} between ${p.fromDay} and ${p.toDay}`,
+      ),
+    )
+    .groupBy(workOrders.technicianId, workOrders.plannedOn);
+  return new Map(rows.map((r) => [`${r.technicianId}|${r.day}`, Number(r.minutes)]));
+}

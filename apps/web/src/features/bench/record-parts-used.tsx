@@ -78,9 +78,6 @@ export function PartsUsedRecord({
               {selectable.map((p) => (
                 <option key={p.id} value={p.id}>
                   {p.line.designator} — {p.line.value} ({partKindLabels[p.line.kind].toLowerCase()})
-                  {fitOf(p.id)
-                    ? ` · ${fitOf(p.id)!.partNumber}${fitOf(p.id)!.vanQuantity !== null ? `, ${fitOf(p.id)!.vanQuantity} on your van` : ''}`
-                    : ''}
                 </option>
               ))}
             </select>

@@ -1,7 +1,7 @@
 // Both sides of a conflict in words: what the office has now (the record the 409 carried) and what the phone sent.
 import { callStateLabels, type CallState } from '@bumperline/contracts/call-vocabulary';
 import { workOrderStateLabels, type WorkOrderState } from '@bumperline/contracts/care-vocabulary';
-import { formatSpokenMinutes } from '@bumperline/domain/spoken-duration';
+import { formatMinutes } from '../../lib/duration-entry.ts';
 import type { QueuedChange } from '../../lib/queued-change.ts';
 
 export type Fact = [label: string, value: string];
@@ -34,7 +34,7 @@ export function sentFacts(change: QueuedChange): Fact[] {
     case 'work-order-done':
       return [
         ['State', (workOrderStateLabels as Record<WorkOrderState, string>).done],
-        ['Time on site', formatSpokenMinutes(change.labourMinutes)],
+        ['Time on site', formatMinutes(change.labourMinutes)],
         ...change.readings.map((r): Fact => [
           `${r.meter === 'plays' ? 'Plays' : r.meter === 'hours' ? 'Hours' : r.meter} meter`,
           String(r.reading),

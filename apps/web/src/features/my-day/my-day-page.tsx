@@ -9,7 +9,7 @@ import { usePendingChanges } from '../../api/technician-changes.ts';
 import { PageHeader } from '../../components/page-header.tsx';
 import { Empty, ErrorState, Loading } from '../../components/states.tsx';
 import { defaultLocale, formatDate } from '../../lib/format.ts';
-import { formatSpokenMinutes } from '@bumperline/domain/spoken-duration';
+import { formatMinutes } from '../../lib/duration-entry.ts';
 import { overlayStopItems } from './day-overlay.ts';
 import { keepStopsOffline } from './my-day-queries.ts';
 import { StopCard } from './stop-card.tsx';
@@ -33,7 +33,7 @@ export function MyDayPage() {
 
   const d = day.data;
   const subtitle = d
-    ? `${formatDate(d.day, locale)} · ${d.stops.length} ${d.stops.length === 1 ? 'stop' : 'stops'} · ${formatSpokenMinutes(d.totals.travelMinutes)} driving · back about ${d.returnTime}`
+    ? `${formatDate(d.day, locale)} · ${d.stops.length} ${d.stops.length === 1 ? 'stop' : 'stops'} · ${formatMinutes(d.totals.travelMinutes)} driving · back about ${d.returnTime}`
     : undefined;
 
   return (

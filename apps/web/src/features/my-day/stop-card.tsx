@@ -4,7 +4,7 @@ import { ChevronRight, Clock, Navigation } from 'lucide-react';
 import { Link } from 'react-router-dom';
 import { stopItemKindLabels } from '@bumperline/contracts/care-vocabulary';
 import type { RouteStop, UnscheduledStop } from '@bumperline/contracts/route-days';
-import { formatSpokenMinutes } from '@bumperline/domain/spoken-duration';
+import { formatMinutes } from '../../lib/duration-entry.ts';
 import { paths } from '../../lib/paths.ts';
 import { openCount, type ItemView } from './day-overlay.ts';
 import { ItemStateBadge } from './item-state-badge.tsx';
@@ -70,8 +70,8 @@ export function StopCard({ number, stop, items }: { number: number | null; stop:
             {stop.venue.address}, {stop.venue.city}
           </p>
           <p className="text-sm text-ink-muted">
-            Open {stop.venue.openingHours} · about {formatSpokenMinutes(stop.onSiteMinutes)} on site
-            {timed && timed.travelMinutesFromPrevious > 0 ? ` · ${formatSpokenMinutes(timed.travelMinutesFromPrevious)} drive` : ''}
+            Open {stop.venue.openingHours} · about {formatMinutes(stop.onSiteMinutes)} on site
+            {timed && timed.travelMinutesFromPrevious > 0 ? ` · ${formatMinutes(timed.travelMinutesFromPrevious)} drive` : ''}
           </p>
         </div>
       </div>

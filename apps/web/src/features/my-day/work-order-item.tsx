@@ -4,8 +4,7 @@ import { useState } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { workOrderQuery } from '../../api/work-orders.ts';
 import { useEnqueueChange } from '../../api/technician-changes.ts';
-import { DomainError } from '@bumperline/domain/errors';
-import { parseSpokenMinutes, formatSpokenMinutes } from '@bumperline/domain/spoken-duration';
+import { formatMinutes, readMinutes } from '../../lib/duration-entry.ts';
 import { asSentence } from '../../lib/format.ts';
 import type { ItemView } from './day-overlay.ts';
 import { ItemStateBadge } from './item-state-badge.tsx';
@@ -36,12 +35,9 @@ export function WorkOrderItem({ item, venueName }: { item: ItemView; venueName: 
 
   function markDone() {
     const problems: Record<string, string> = {};
-    let labourMinutes = 0;
-    try {
-      labourMinutes = parseSpokenMinutes(time, 'labourMinutes');
-    } catch (e) {
-      problems.labourMinutes = e instanceof DomainError ? asSentence(e.message) : 'Say how long, e.g. "45 min".';
-    }
+    const spent = readMinutes(time, { min: 0 });
+    const labourMinutes = spent.ok ? spent.value : 0;
+    if (!spent.ok) problems.labourMinutes = asSentence(spent.message);
     const readings: { meter: 'plays' | 'hours'; reading: number; rolledOver: boolean }[] = [];
     for (const [meter, text] of [
       ['plays', plays],
@@ -60,7 +56,7 @@ export function WorkOrderItem({ item, venueName }: { item: ItemView; venueName: 
       labourMinutes,
       note: note.trim(),
       readings,
-      label: { what: `Done: ${item.title} (${formatSpokenMinutes(labourMinutes)})`, where },
+      label: { what: `Done: ${item.title} (${formatMinutes(labourMinutes)})`, where },
     });
   }
 
@@ -122,7 +118,7 @@ export function WorkOrderItem({ item, venueName }: { item: ItemView; venueName: 
                 className={input}
                 value={time}
                 onChange={(e) => setTime(e.target.value)}
-                placeholder={formatSpokenMinutes(item.onSiteMinutes)}
+                placeholder={formatMinutes(item.onSiteMinutes)}
                 inputMode="text"
                 aria-invalid={!!errors.labourMinutes}
                 aria-describedby={errors.labourMinutes ? fieldId('labourMinutes') + '-error' : undefined}

@@ -10,7 +10,7 @@ import { stopItemKindLabels } from '@bumperline/contracts/care-vocabulary';
 import type { RouteStop, RouteStopItem, UnscheduledStop } from '@bumperline/contracts/route-days';
 import type { RouteStyle } from '../../components/route-styles.ts';
 import { formatDate } from '../../lib/format.ts';
-import { formatSpokenMinutes } from '@bumperline/domain/spoken-duration';
+import { formatMinutes } from '../../lib/duration-entry.ts';
 import { formatKm } from './words.ts';
 
 export function StopBadge({ style, label }: { style: RouteStyle; label: string }) {
@@ -91,16 +91,16 @@ export function SortableStopCard({ id, stop, number, style, fromHome, locale, di
             <span>
               {stop.serviceStart}–{stop.departure}
             </span>
-            <span className="font-normal text-ink-soft">({formatSpokenMinutes(stop.onSiteMinutes)} on site)</span>
+            <span className="font-normal text-ink-soft">({formatMinutes(stop.onSiteMinutes)} on site)</span>
           </p>
           {stop.waitMinutes > 0 && (
             <p className="flex items-center gap-1 text-sm text-attention">
               <Hourglass aria-hidden className="size-4" />
-              Arrives {stop.arrival}, waits {formatSpokenMinutes(stop.waitMinutes)} for opening
+              Arrives {stop.arrival}, waits {formatMinutes(stop.waitMinutes)} for opening
             </p>
           )}
           <p className="text-sm text-ink-soft">
-            {formatSpokenMinutes(stop.travelMinutesFromPrevious)} · {formatKm(stop.kmFromPrevious, locale)} from{' '}
+            {formatMinutes(stop.travelMinutesFromPrevious)} · {formatKm(stop.kmFromPrevious, locale)} from{' '}
             {fromHome ? 'the start' : 'the previous stop'}
             {' · '}Open {stop.venue.openingHours}
           </p>
@@ -139,7 +139,7 @@ export function UnscheduledStopCard({ stop, children }: { stop: UnscheduledStop;
         <span>Not on the route: {stop.reason}.</span>
       </p>
       <p className="text-sm text-ink-soft">
-        Open {stop.venue.openingHours} · {formatSpokenMinutes(stop.onSiteMinutes)} on site
+        Open {stop.venue.openingHours} · {formatMinutes(stop.onSiteMinutes)} on site
       </p>
       <StopItems items={stop.items} />
       {children}

@@ -8,7 +8,7 @@ import type { RouteDay } from '@bumperline/contracts/route-days';
 import type { RouteStyle } from '../../components/route-styles.ts';
 import { MoveStopForm } from './move-stop-form.tsx';
 import { SortableStopCard, StopBadge, UnscheduledStopCard } from './stop-card.tsx';
-import { formatSpokenMinutes } from '@bumperline/domain/spoken-duration';
+import { formatMinutes } from '../../lib/duration-entry.ts';
 import { formatKm } from './words.ts';
 
 export const stopDragId = (technicianId: string, venueId: string) => `stop:${technicianId}:${venueId}`;
@@ -57,8 +57,8 @@ export function TechnicianColumn({ day, style, technicians, locale, busy, onRese
         </p>
         <p className="flex items-center gap-1 text-sm text-ink-soft tabular-nums" data-testid="column-totals">
           <Route aria-hidden className="size-4" />
-          {day.stops.length} {day.stops.length === 1 ? 'stop' : 'stops'} · {formatSpokenMinutes(day.totals.travelMinutes)} driving ·{' '}
-          {formatKm(day.totals.km, locale)} · {formatSpokenMinutes(day.totals.onSiteMinutes)} on site
+          {day.stops.length} {day.stops.length === 1 ? 'stop' : 'stops'} · {formatMinutes(day.totals.travelMinutes)} driving ·{' '}
+          {formatKm(day.totals.km, locale)} · {formatMinutes(day.totals.onSiteMinutes)} on site
         </p>
         <div className="flex flex-wrap items-center gap-2 text-sm">
           <span className="font-semibold text-ink" data-testid="order-kind">

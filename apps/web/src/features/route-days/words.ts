@@ -1,4 +1,4 @@
-// How the route-day screen says distances and moves between dates (durations: formatSpokenMinutes in the domain).
+// How the route-day screen says distances and moves between dates (durations: formatMinutes in lib/duration-entry.ts).
 
 /** "14.5 km", in the company's locale. */
 export function formatKm(km: number, locale = 'en-US'): string {
