@@ -37,7 +37,9 @@ export function PartsUsedRecord({
   const change = (list: BenchPartUsed[]) => edit((d) => setPartsUsed(d, list));
   const update = (i: number, value: Partial<BenchPartUsed>) => change(partsUsed.map((u, j) => (j === i ? { ...u, ...value } : u)));
   const selectable = (stepParts.length ? stepParts : boardParts).filter((p) => !p.line.removed);
-  // The catalogue part linked to each entry (the first, when several fit), with how many are on the van.
+  // The catalogue part linked to each entry (the first, when several fit), with how many are on the van: a line
+  // added from the list names it only when the van holds one, so finishing takes it off the van; otherwise the part
+  // came from elsewhere and no stock moves.
   const board = useQuery({ ...boardPageQuery(boardInstanceId ?? ''), enabled: !!boardInstanceId });
   const fits = useBoardCatalogueFits(boardInstanceId ? board.data?.instance.boardId : undefined);
   const fitOf = (boardPartId: string) => fits.data?.items.find((f) => f.boardPartId === boardPartId);
@@ -95,7 +97,7 @@ export function PartsUsedRecord({
                     partId: part.id,
                     description: `${part.line.designator} ${part.line.value}`,
                     quantity: 1,
-                    cataloguePartId: fit?.cataloguePartId ?? null,
+                    cataloguePartId: fit && (fit.vanQuantity ?? 0) >= 1 ? fit.cataloguePartId : null,
                   },
                 ]);
                 setPicked('');
