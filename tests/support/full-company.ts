@@ -226,10 +226,19 @@ async function createCareRows(db: TestDatabase, company: CompanyFixture, technic
     })
     .returning({ id: workOrders.id });
   await db.owner.insert(gameMeters).values({ tenantId, gameId, meter: 'plays', rollsOverAt: 1_000_000 });
-  await db.owner.insert(meterReadings).values({ tenantId, gameId, meter: 'plays', reading: 15_230, source: 'work_order', workOrderId: order!.id });
+  await db.owner
+    .insert(meterReadings)
+    .values({ tenantId, gameId, meter: 'plays', reading: 15_230, source: 'work_order', workOrderId: order!.id });
   const [part] = await db.owner
     .insert(catalogueParts)
-    .values({ tenantId, partNumber: 'F-T2.5A', description: 'Fuse T2.5A 250V 5×20 mm', kind: 'fuse', unitCostCents: 45, supplier: 'Parts house' })
+    .values({
+      tenantId,
+      partNumber: 'F-T2.5A',
+      description: 'Fuse T2.5A 250V 5×20 mm',
+      kind: 'fuse',
+      unitCostCents: 45,
+      supplier: 'Parts house',
+    })
     .returning({ id: catalogueParts.id });
   await db.owner.insert(partFits).values({ tenantId, cataloguePartId: part!.id, boardPartId: bench.fusePartId });
   const [warehouse] = await db.owner
@@ -255,7 +264,15 @@ async function createCareRows(db: TestDatabase, company: CompanyFixture, technic
   });
   const [used] = await db.owner
     .insert(stockMovements)
-    .values({ tenantId, cataloguePartId: part!.id, reason: 'used', fromLocationId: van!.id, quantity: 1, unitCostCents: 45, workOrderId: order!.id })
+    .values({
+      tenantId,
+      cataloguePartId: part!.id,
+      reason: 'used',
+      fromLocationId: van!.id,
+      quantity: 1,
+      unitCostCents: 45,
+      workOrderId: order!.id,
+    })
     .returning({ id: stockMovements.id });
   await db.owner.insert(partsUsed).values({
     tenantId,

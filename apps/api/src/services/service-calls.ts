@@ -185,7 +185,8 @@ export async function transitionCall(
     await updateGame(tx, call.gameId, game.version, { status: 'in_shop' });
   } else if (p.to === 'fixed' || p.to === 'cancelled') {
     await gameBackInService(tx, call.gameId, now);
-    if (p.to === 'fixed') await recordServiceCallKeepCost(tx, { callId: call.id, gameId: call.gameId, technicianId: call.technicianId, fixedAt: now });
+    if (p.to === 'fixed')
+      await recordServiceCallKeepCost(tx, { callId: call.id, gameId: call.gameId, technicianId: call.technicianId, fixedAt: now });
   } else if (p.to === 'on_site' && call.state === 'fixed') {
     await gameFollowsCall(tx, call.gameId, call.severity, call.id, now); // reopened: not fixed after all
   }

@@ -58,15 +58,19 @@ export const carePlans = tenantTable(
       'care_plans_target_check',
       sql`(scope = 'model' and model_id is not null and game_id is null) or (scope = 'game' and game_id is not null and model_id is null)`,
     ),
-    check(
-      'care_plans_trigger_check',
-      sql`rule is not null or plays_every is not null or hours_every is not null or by_capacitor_life`,
-    ),
+    check('care_plans_trigger_check', sql`rule is not null or plays_every is not null or hours_every is not null or by_capacitor_life`),
     check('care_plans_rule_start_check', sql`(rule is null) = (rule_start is null)`),
-    check('care_plans_positive_check', sql`on_site_minutes > 0 and coalesce(plays_every, 1) > 0 and coalesce(hours_every, 1) > 0 and lead_days >= 0`),
+    check(
+      'care_plans_positive_check',
+      sql`on_site_minutes > 0 and coalesce(plays_every, 1) > 0 and coalesce(hours_every, 1) > 0 and lead_days >= 0`,
+    ),
     index('care_plans_tenant_name_idx').on(t.tenantId, sql`lower(${t.name})`, t.id),
-    index('care_plans_tenant_model_idx').on(t.tenantId, t.modelId).where(sql`model_id is not null`),
-    index('care_plans_tenant_game_idx').on(t.tenantId, t.gameId).where(sql`game_id is not null`),
+    index('care_plans_tenant_model_idx')
+      .on(t.tenantId, t.modelId)
+      .where(sql`model_id is not null`),
+    index('care_plans_tenant_game_idx')
+      .on(t.tenantId, t.gameId)
+      .where(sql`game_id is not null`),
   ],
 );
 
@@ -119,10 +123,16 @@ export const workOrders = tenantTable(
     workOrderState.check('work_orders_state_check', t.state),
     check('work_orders_skip_reason_check', sql`state <> 'skipped' or length(trim(skip_reason)) > 0`),
     check('work_orders_labour_check', sql`labour_minutes is null or labour_minutes >= 0`),
-    uniqueIndex('work_orders_one_open_key').on(t.tenantId, t.carePlanId, t.gameId).where(sql`state = 'open'`),
+    uniqueIndex('work_orders_one_open_key')
+      .on(t.tenantId, t.carePlanId, t.gameId)
+      .where(sql`state = 'open'`),
     index('work_orders_tenant_plan_game_idx').on(t.tenantId, t.carePlanId, t.gameId, t.closedAt),
-    index('work_orders_tenant_open_due_idx').on(t.tenantId, t.dueAt, t.id).where(sql`state = 'open'`),
-    index('work_orders_tenant_tech_day_idx').on(t.tenantId, t.technicianId, t.plannedOn, t.id).where(sql`state = 'open'`),
+    index('work_orders_tenant_open_due_idx')
+      .on(t.tenantId, t.dueAt, t.id)
+      .where(sql`state = 'open'`),
+    index('work_orders_tenant_tech_day_idx')
+      .on(t.tenantId, t.technicianId, t.plannedOn, t.id)
+      .where(sql`state = 'open'`),
     index('work_orders_tenant_game_idx').on(t.tenantId, t.gameId, t.createdAt, t.id),
     index('work_orders_tenant_state_idx').on(t.tenantId, t.state, t.dueAt, t.id),
   ],

@@ -69,7 +69,9 @@ export const stockLocations = tenantTable(
   (t) => [
     stockLocationKind.check('stock_locations_kind_check', t.kind),
     check('stock_locations_van_check', sql`kind = 'van' or technician_id is null`),
-    uniqueIndex('stock_locations_tenant_van_key').on(t.tenantId, t.technicianId).where(sql`technician_id is not null`),
+    uniqueIndex('stock_locations_tenant_van_key')
+      .on(t.tenantId, t.technicianId)
+      .where(sql`technician_id is not null`),
     index('stock_locations_tenant_kind_idx').on(t.tenantId, t.kind, t.name, t.id),
   ],
 );
@@ -95,7 +97,9 @@ export const stockLevels = tenantTable(
     check('stock_levels_quantity_check', sql`quantity >= 0`),
     check('stock_levels_reorder_check', sql`coalesce(reorder_point, 0) >= 0 and coalesce(reorder_quantity, 1) > 0`),
     index('stock_levels_tenant_part_idx').on(t.tenantId, t.cataloguePartId),
-    index('stock_levels_tenant_reorder_idx').on(t.tenantId, t.locationId, t.cataloguePartId).where(sql`quantity <= reorder_point`),
+    index('stock_levels_tenant_reorder_idx')
+      .on(t.tenantId, t.locationId, t.cataloguePartId)
+      .where(sql`quantity <= reorder_point`),
   ],
   { key: (t) => [t.locationId, t.cataloguePartId] },
 );
@@ -140,8 +144,12 @@ export const stockMovements = tenantTable(
         or (reason = 'counted' and to_location_id is not null and expected_quantity is not null and counted_quantity is not null)`,
     ),
     index('stock_movements_tenant_part_idx').on(t.tenantId, t.cataloguePartId, t.at, t.id),
-    index('stock_movements_tenant_from_idx').on(t.tenantId, t.fromLocationId, t.at, t.id).where(sql`from_location_id is not null`),
-    index('stock_movements_tenant_to_idx').on(t.tenantId, t.toLocationId, t.at, t.id).where(sql`to_location_id is not null`),
+    index('stock_movements_tenant_from_idx')
+      .on(t.tenantId, t.fromLocationId, t.at, t.id)
+      .where(sql`from_location_id is not null`),
+    index('stock_movements_tenant_to_idx')
+      .on(t.tenantId, t.toLocationId, t.at, t.id)
+      .where(sql`to_location_id is not null`),
   ],
 );
 
@@ -171,8 +179,12 @@ export const partsUsed = tenantTable(
     foreignKey({ columns: [t.tenantId, t.movementId], foreignColumns: [stockMovements.tenantId, stockMovements.id] }),
     check('parts_used_one_job_check', sql`(service_call_id is null) <> (work_order_id is null)`),
     check('parts_used_quantity_check', sql`quantity > 0`),
-    index('parts_used_tenant_call_idx').on(t.tenantId, t.serviceCallId).where(sql`service_call_id is not null`),
-    index('parts_used_tenant_work_order_idx').on(t.tenantId, t.workOrderId).where(sql`work_order_id is not null`),
+    index('parts_used_tenant_call_idx')
+      .on(t.tenantId, t.serviceCallId)
+      .where(sql`service_call_id is not null`),
+    index('parts_used_tenant_work_order_idx')
+      .on(t.tenantId, t.workOrderId)
+      .where(sql`work_order_id is not null`),
     index('parts_used_tenant_game_idx').on(t.tenantId, t.gameId, t.usedAt, t.id),
   ],
 );
