@@ -71,7 +71,7 @@ function TemplateEditor({ template }: { template: BenchTemplate | null }) {
       <PageHeader
         title={template ? `Edit “${template.name}”` : 'New bench-job template'}
         subtitle={
-          <Link className="link" to={template ? paths.benchTemplate(template.id) : paths.bench}>
+          <Link className="link inline-flex min-h-6 items-center" to={template ? paths.benchTemplate(template.id) : paths.bench}>
             Back without saving
           </Link>
         }
