@@ -3,12 +3,12 @@
 // venue; the dispatcher drags the second stop first and the technician's phone shows the new order; without signal the
 // technician marks the work done with a part from the van, reloads, sees what is not sent, and when the signal is back
 // it arrives once — the van's stock went down by one and the game's page shows the work. Phone screens at 390 × 844.
-import { expect, test, type Browser, type Locator, type Page } from '@playwright/test';
+import { expect, test, type Browser, type Page } from '@playwright/test';
 import type { RouteDay, RouteDayBoard } from '@bumperline/contracts/route-days';
 import type { MyVan } from '@bumperline/contracts/stock';
 import type { WorkOrder, WorkOrderPage } from '@bumperline/contracts/work-orders';
 import type { PartsUsedList } from '@bumperline/contracts/parts-used';
-import { DEMO_PASSWORD, failOnConsoleErrors, scan, signIn } from './fixtures.ts';
+import { DEMO_PASSWORD, dragStop, failOnConsoleErrors, scan, signIn } from './fixtures.ts';
 
 const PHONE = { width: 390, height: 844 };
 const JSON_HEADERS = { 'X-Requested-With': 'bumperline', 'Content-Type': 'application/json' };
@@ -26,19 +26,6 @@ async function json<T>(page: Page, url: string): Promise<T> {
 }
 
 const board = (page: Page) => json<RouteDayBoard>(page, '/api/route-days');
-
-/** Drags a stop by its handle onto a target in small steps, as a hand would (dnd-kit waits for a few px of travel). */
-async function drag(page: Page, stop: Locator, target: Locator) {
-  const handle = stop.getByRole('button', { name: /^Drag / });
-  await handle.scrollIntoViewIfNeeded();
-  const from = (await handle.boundingBox())!;
-  await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2);
-  await page.mouse.down();
-  await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2 - 12, { steps: 4 });
-  const to = (await target.boundingBox())!;
-  await page.mouse.move(to.x + to.width / 2, to.y + 8, { steps: 20 });
-  await page.mouse.up();
-}
 
 async function technicianPhone(browser: Browser): Promise<Page> {
   // The service worker serves the app shell offline (the config blocks it for the other suites).
@@ -137,7 +124,7 @@ test('a care plan’s work reaches the technician’s route day, is reordered by
   await scan(page, 'story-route-day-planned');
 
   // 4. The dispatcher drags the second stop first: the order is kept and the times re-planned.
-  await drag(page, column.getByTestId('route-stop').nth(1), column.getByTestId('route-stop').nth(0));
+  await dragStop(page, column.getByTestId('route-stop').nth(1), column.getByTestId('route-stop').nth(0));
   await expect(column.getByTestId('order-kind')).toHaveText('Order kept by the office');
   await expect.poll(venueOrder).toEqual([planned[1], planned[0]]);
 

@@ -1,5 +1,5 @@
 // Shared steps for the browser tests: sign in as a demo person, scan a screen with axe, keep a screenshot.
-import { expect, type Page } from '@playwright/test';
+import { expect, type Locator, type Page } from '@playwright/test';
 import AxeBuilder from '@axe-core/playwright';
 
 export const DEMO_PASSWORD = 'bumperline-demo';
@@ -59,4 +59,17 @@ export function failOnConsoleErrors(page: Page) {
   });
   page.on('pageerror', (e) => errors.push(e.message));
   return () => expect(errors).toEqual([]);
+}
+
+/** Drags a route stop by its handle onto a target in small steps, as a hand would (dnd-kit waits for 6 px of travel). */
+export async function dragStop(page: Page, stop: Locator, target: Locator) {
+  const handle = stop.getByRole('button', { name: /^Drag / });
+  await handle.scrollIntoViewIfNeeded();
+  const from = (await handle.boundingBox())!;
+  await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2);
+  await page.mouse.down();
+  await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2 - 12, { steps: 4 });
+  const to = (await target.boundingBox())!;
+  await page.mouse.move(to.x + to.width / 2, to.y + 8, { steps: 20 });
+  await page.mouse.up();
 }

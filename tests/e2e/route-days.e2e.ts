@@ -3,7 +3,7 @@
 // another technician's column — each screen scanned with axe and kept as a screenshot.
 import { expect, test, type Locator, type Page } from '@playwright/test';
 import type { RouteDayBoard } from '@bumperline/contracts/route-days';
-import { demo, failOnConsoleErrors, scan, signIn } from './fixtures.ts';
+import { demo, dragStop, failOnConsoleErrors, scan, signIn } from './fixtures.ts';
 
 const HEADERS = { 'X-Requested-With': 'bumperline', 'Content-Type': 'application/json' };
 
@@ -37,19 +37,6 @@ async function arrangeStops(page: Page, technicianId: string) {
   }
 }
 
-/** Drags a stop by its handle onto a target, in small steps as a hand would (dnd-kit waits for 6 px of travel). */
-async function drag(page: Page, stop: Locator, target: Locator) {
-  const handle = stop.getByRole('button', { name: /^Drag / });
-  await handle.scrollIntoViewIfNeeded();
-  const from = (await handle.boundingBox())!;
-  await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2);
-  await page.mouse.down();
-  await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2 - 12, { steps: 4 });
-  const to = (await target.boundingBox())!;
-  await page.mouse.move(to.x + to.width / 2, to.y + 8, { steps: 20 });
-  await page.mouse.up();
-}
-
 const venueOrder = (column: Locator) =>
   column.getByTestId('route-stop').evaluateAll((els) => els.map((el) => el.getAttribute('data-venue-id')));
 
@@ -76,7 +63,7 @@ test('dispatcher reorders a technician’s stops by dragging, the times re-plan,
   // Drag the second stop above the first: the order is kept, and the first stop's times are now the other venue's.
   const order = await venueOrder(column);
   const timesBefore = await column.getByTestId('stop-times').allTextContents();
-  await drag(page, column.getByTestId('route-stop').nth(1), column.getByTestId('route-stop').nth(0));
+  await dragStop(page, column.getByTestId('route-stop').nth(1), column.getByTestId('route-stop').nth(0));
   await expect(page.getByText('order is kept and the times re-planned')).toBeVisible();
   await expect(column.getByTestId('order-kind')).toHaveText('Order kept by the office');
   // (A stop the kept order can no longer reach inside its opening hours moves to "Could not be fitted".)
@@ -118,7 +105,7 @@ test('dispatcher reorders a technician’s stops by dragging, the times re-plan,
   // route, or under "Could not be fitted" with the reason when their day is full).
   const moving = (await venueOrder(column))[0]!;
   const other = page.locator(`[data-technician-id="${second.technician.id}"]`);
-  await drag(page, column.getByTestId('route-stop').first(), other.getByRole('list').first());
+  await dragStop(page, column.getByTestId('route-stop').first(), other.getByRole('list').first());
   await expect(page.getByText(/moved to/)).toBeVisible();
   await expect(other.locator(`[data-venue-id="${moving}"]`)).toBeVisible();
   await expect(column.locator(`[data-venue-id="${moving}"]`)).toHaveCount(0);
