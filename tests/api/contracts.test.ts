@@ -11,6 +11,7 @@ import { mailSentIfKnown, me, signUpAnswered } from '@bumperline/contracts/auth'
 import {
   callDetail,
   callPage,
+  callPhotoAdded,
   noteAdded,
   openedCall,
   rankedTechnicianList,
@@ -58,7 +59,7 @@ import {
   unique,
   type TagReport,
 } from '../support/fresh-rows.ts';
-import { benchPhotoOnce, emptyBenchDraft, freshBenchJob, sendBenchPhoto } from '../support/bench-rows.ts';
+import { benchPhotoOnce, emptyBenchDraft, freshBenchJob, samplePng, sendBenchPhoto } from '../support/bench-rows.ts';
 import { appWithFullCompany, type FullCompany } from '../support/full-company.ts';
 import { listRoutes } from '../support/route-list.ts';
 import { freshPlannedStop, freshRouteDay } from '../support/route-day-rows.ts';
@@ -878,6 +879,16 @@ const endpoints: Record<string, Endpoint> = {
     status: 201,
     answer: noteAdded,
     probe: (a) => a.post(`/api/calls/${company.downCallId}/notes`).set(JSON_HEADERS).send({ note: 'Checked the fuses' }),
+  },
+  'POST /api/calls/:id/photos': {
+    as: 'owner',
+    status: 201,
+    answer: callPhotoAdded,
+    probe: async (a) =>
+      a
+        .post(`/api/calls/${company.downCallId}/photos`)
+        .set(JSON_HEADERS)
+        .attach('photo', await samplePng(), { filename: 'game.png', contentType: 'image/png' }),
   },
   'GET /api/calls/:id/photos/:photoId': {
     as: 'owner',

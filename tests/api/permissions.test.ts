@@ -19,7 +19,7 @@ import {
   unique,
   type TagReport,
 } from '../support/fresh-rows.ts';
-import { benchPhotoOnce, emptyBenchDraft, freshBenchJob, sendBenchPhoto } from '../support/bench-rows.ts';
+import { benchPhotoOnce, emptyBenchDraft, freshBenchJob, samplePng, sendBenchPhoto } from '../support/bench-rows.ts';
 import { appWithFullCompany, type FullCompany } from '../support/full-company.ts';
 import { listRoutes, type ListedRoute } from '../support/route-list.ts';
 import { freshPlannedStop, freshRouteDay } from '../support/route-day-rows.ts';
@@ -792,6 +792,15 @@ const routes: Record<string, RouteCase> = {
     access: 'calls:work',
     ok: 201,
     probe: (c) => c.agent.post(`/api/calls/${company.downCallId}/notes`).set(JSON_HEADERS).send({ note: 'Checked the fuses' }),
+  },
+  'POST /api/calls/:id/photos': {
+    access: 'calls:work',
+    ok: 201,
+    probe: async (c) =>
+      c.agent
+        .post(`/api/calls/${company.downCallId}/photos`)
+        .set(JSON_HEADERS)
+        .attach('photo', await samplePng(), { filename: 'game.png', contentType: 'image/png' }),
   },
   'GET /api/calls/:id/photos/:photoId': {
     access: 'calls:read',

@@ -127,6 +127,10 @@ export const callPhoto = z.strictObject({
 });
 export type CallPhoto = z.infer<typeof callPhoto>;
 
+/** The answer to a staff photo added to a call: its id and its entry in the call's photo list. */
+export const callPhotoAdded = z.strictObject({ photoId: uuid, photo: callPhoto });
+export type CallPhotoAdded = z.infer<typeof callPhotoAdded>;
+
 export const callDetail = z.strictObject({
   call: serviceCall,
   events: z.array(callEvent),

@@ -20,7 +20,9 @@ import { ConflictError, NotFoundError } from '../http/errors.ts';
 import { parse } from '../http/validate.ts';
 import { idParam } from '../http/params.ts';
 import type { makeScoped, TenantActor } from '../http/guards.ts';
+import { takePhoto, takenPhoto } from '../http/photo-upload.ts';
 import { answerAssignment, assignCall, openCall, transitionCall, type CallActor } from '../services/service-calls.ts';
+import { addStaffPhoto } from '../services/call-photos.ts';
 import type { PhotoStore } from '../services/photo-store.ts';
 import { suggestTechnicians } from '../services/technician-suggestions.ts';
 
@@ -127,6 +129,17 @@ export function callsRouter(deps: { scoped: ReturnType<typeof makeScoped>; appOr
         await insertEvent(tx, { callId: id, kind: 'note', actorUserId: actor.userId, actorLabel: actor.name, detail: { note } });
         return { ok: true };
       },
+      201,
+    ),
+  );
+
+  // A photo from the technician's phone, often queued without signal and sent later with its Idempotency-Key.
+  r.post(
+    '/:id/photos',
+    takePhoto('calls:work'),
+    scoped(
+      'calls:work',
+      ({ tx, req, res, actor }) => addStaffPhoto(tx, photos, { callId: idParam(req), photo: takenPhoto(res), actor: actorOf(actor) }),
       201,
     ),
   );

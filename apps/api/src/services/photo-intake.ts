@@ -143,10 +143,16 @@ export async function storePreparedPhoto(store: PhotoStore, photo: PreparedPhoto
 export async function savePhoto(
   tx: Tx,
   store: PhotoStore,
-  p: { callId: string; photo: PreparedPhoto; uploadedBy: string; actorLabel: string; written?: string[] },
+  p: { callId: string; photo: PreparedPhoto; uploadedBy: string; actorUserId?: string | null; actorLabel: string; written?: string[] },
 ): Promise<string> {
   const stored = await storePreparedPhoto(store, p.photo, p.written);
   const photoId = await insertPhoto(tx, { callId: p.callId, ...stored, uploadedBy: p.uploadedBy });
-  await insertEvent(tx, { callId: p.callId, kind: 'photo', actorUserId: null, actorLabel: p.actorLabel, detail: { photoId } });
+  await insertEvent(tx, {
+    callId: p.callId,
+    kind: 'photo',
+    actorUserId: p.actorUserId ?? null,
+    actorLabel: p.actorLabel,
+    detail: { photoId },
+  });
   return photoId;
 }

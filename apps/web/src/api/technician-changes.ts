@@ -6,6 +6,7 @@
 import { MutationObserver, useMutationState, useQueryClient, type Mutation, type QueryClient } from '@tanstack/react-query';
 import { ApiError, api } from '../lib/api-client.ts';
 import { failedChanges } from '../lib/failed-changes.ts';
+import { dropQueuedPhoto, readQueuedPhoto } from '../lib/queued-photos.ts';
 import {
   decideAfterFailure,
   followOwnChanges,
@@ -34,6 +35,7 @@ const changeKinds: readonly ChangeKind[] = [
   'meter-reading',
   'call-transition',
   'call-note',
+  'call-photo',
 ];
 
 /** The request each kind makes (the endpoints of work orders, parts used, meters and calls). */
@@ -62,7 +64,26 @@ function requestFor(c: QueuedChange): { path: string; body: unknown } {
       };
     case 'call-note':
       return { path: `/api/calls/${c.callId}/notes`, body: { note: c.note } };
+    case 'call-photo':
+      // The picture is read from IndexedDB at send time (photoForm).
+      return { path: `/api/calls/${c.callId}/photos`, body: undefined };
   }
+}
+
+/** The queued photo as the form the API takes; gone from this phone (storage cleared) is a refusal, not a retry. */
+async function photoForm(photoKey: string): Promise<FormData> {
+  const photo = await readQueuedPhoto(photoKey);
+  if (!photo) {
+    throw new ApiError({
+      type: 'about:blank',
+      title: 'Photo not on this phone',
+      status: 410,
+      detail: 'The photo is no longer on this phone.',
+    });
+  }
+  const form = new FormData();
+  form.append('photo', photo, 'photo.jpg');
+  return form;
 }
 
 /** Versions this phone's own changes moved records to, so a second change to the same record follows the first. */
@@ -71,7 +92,9 @@ const ownVersions: OwnVersions = new Map();
 export async function sendChange(change: QueuedChange): Promise<unknown> {
   const c = followOwnChanges(change, ownVersions);
   const { path, body } = requestFor(c);
-  const answer = await api<unknown>('POST', path, { body, headers: { 'Idempotency-Key': c.key } });
+  const sent = c.kind === 'call-photo' ? await photoForm(c.photoKey) : body;
+  const answer = await api<unknown>('POST', path, { body: sent, headers: { 'Idempotency-Key': c.key } });
+  if (c.kind === 'call-photo') await dropQueuedPhoto(c.photoKey);
   const target = versionedTarget(c);
   const version = (answer as { version?: unknown } | undefined)?.version;
   if (target && typeof version === 'number') noteOwnChange(ownVersions, target.id, target.version, version);
@@ -120,6 +143,12 @@ export function enqueueChange(qc: QueryClient, change: NewChange | QueuedChange)
 export function useEnqueueChange(): (change: NewChange) => QueuedChange {
   const qc = useQueryClient();
   return (change) => enqueueChange(qc, change);
+}
+
+/** The technician drops a change the office refused (and the photo it would have sent). */
+export function dropChange(change: QueuedChange): void {
+  failedChanges.remove(change.key);
+  if (change.kind === 'call-photo') void dropQueuedPhoto(change.photoKey);
 }
 
 /** Sends a change the office refused again, based on the version it has now (same key: the refusal was not kept). */

@@ -7,6 +7,7 @@ import { createStore, del, get, set, type UseStore } from 'idb-keyval';
 import type { Me } from '@bumperline/contracts/auth';
 import { isQueuedChange, registerTechnicianChanges } from '../api/technician-changes.ts';
 import { failedChanges, type FailedChange } from '../lib/failed-changes.ts';
+import { forgetQueuedPhotos } from '../lib/queued-photos.ts';
 import { isOfflineQueryKey, offlineKeyPrefixes } from '../lib/offline-set.ts';
 
 /** Changing what is saved (or its shape) means older copies are not read. */
@@ -76,6 +77,7 @@ export async function forgetOfflineCopy(): Promise<void> {
   localStorage.removeItem(OWNER_KEY);
   failedChanges.replaceAll([]);
   if (owner) await del(owner.userId, idb()).catch(() => undefined);
+  await forgetQueuedPhotos();
 }
 
 /**

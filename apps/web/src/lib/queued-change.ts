@@ -34,6 +34,8 @@ export type QueuedChange = Base &
     | { kind: 'meter-reading'; gameId: string; meter: MeterKind; reading: number; rolledOver: boolean }
     | { kind: 'call-transition'; callId: string; version: number; to: CallState; note?: string }
     | { kind: 'call-note'; callId: string; note: string }
+    /** A photo of the game; the picture itself waits in IndexedDB under `photoKey` (lib/queued-photos.ts). */
+    | { kind: 'call-photo'; callId: string; photoKey: string }
   );
 
 export type ChangeKind = QueuedChange['kind'];

@@ -7,6 +7,7 @@ import { useEnqueueChange } from '../../api/technician-changes.ts';
 import { paths } from '../../lib/paths.ts';
 import type { ItemView } from './day-overlay.ts';
 import { ItemStateBadge } from './item-state-badge.tsx';
+import { AddPhoto } from './add-photo.tsx';
 import { PartsUsedSection } from './parts-used-section.tsx';
 
 /** A technician moves a call along; cancelling is the office's. */
@@ -47,6 +48,7 @@ export function CallItem({ item, venueName }: { item: ItemView; venueName: strin
           ))}
         </div>
       )}
+      <AddPhoto callId={item.id} game={item.game.modelTitle} where={where} />
       <PartsUsedSection on="call" id={item.id} title={item.title} where={where} />
       <form
         className="grid gap-2"

@@ -5,14 +5,15 @@ import { AlertTriangle, CheckCircle2, CloudOff, CloudUpload, Loader2 } from 'luc
 import { useQueryClient } from '@tanstack/react-query';
 import { Link } from 'react-router-dom';
 import { useLocaleSettings } from '../../api/me.ts';
-import { sendAgain, usePendingChanges } from '../../api/technician-changes.ts';
+import { dropChange, sendAgain, usePendingChanges } from '../../api/technician-changes.ts';
 import { PageHeader } from '../../components/page-header.tsx';
-import { failedChanges, useFailedChanges, type FailedChange } from '../../lib/failed-changes.ts';
+import { useFailedChanges, type FailedChange } from '../../lib/failed-changes.ts';
 import { asSentence, defaultLocale } from '../../lib/format.ts';
 import { paths } from '../../lib/paths.ts';
 import { changeLine, queuedAtText } from '../../lib/queued-change.ts';
 import { officeFacts, sentFacts, type Fact } from './conflict-facts.ts';
 import { useOnline } from './use-online.ts';
+import { QueuedPhotoThumb } from './queued-photo-thumb.tsx';
 
 function Facts({ title, facts }: { title: string; facts: Fact[] }) {
   return (
@@ -63,7 +64,7 @@ function FailedCard({ failed, time }: { failed: FailedChange; time: string }) {
             Send mine again
           </button>
         )}
-        <button type="button" className="btn-danger min-h-14 text-lg" onClick={() => failedChanges.remove(failed.change.key)}>
+        <button type="button" className="btn-danger min-h-14 text-lg" onClick={() => dropChange(failed.change)}>
           Drop mine
         </button>
       </div>
@@ -123,6 +124,7 @@ export function ChangesPage() {
                 ) : (
                   <Loader2 aria-hidden className="mt-0.5 size-5 shrink-0 animate-spin text-ink-muted" />
                 )}
+                {change.kind === 'call-photo' && <QueuedPhotoThumb photoKey={change.photoKey} />}
                 <div className="min-w-0">
                   <p className="font-bold break-words text-ink">{changeLine(change)}</p>
                   <p className="text-ink-soft">

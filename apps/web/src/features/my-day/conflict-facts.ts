@@ -52,6 +52,8 @@ export function sentFacts(change: QueuedChange): Fact[] {
       return [['State', callStateLabels[change.to]]];
     case 'call-note':
       return [['Note', change.note]];
+    case 'call-photo':
+      return [['Photo', 'one photo of the game']];
     case 'parts-used':
       return [['Quantity', String(change.quantity)]];
     case 'meter-reading':

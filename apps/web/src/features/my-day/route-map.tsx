@@ -3,7 +3,7 @@
 import 'leaflet/dist/leaflet.css';
 import { useState } from 'react';
 import L from 'leaflet';
-import { MapContainer, Marker, Polyline, TileLayer, Tooltip } from 'react-leaflet';
+import { MapContainer, Marker, Polyline, TileLayer } from 'react-leaflet';
 import type { RouteDay } from '@bumperline/contracts/route-days';
 
 function numberIcon(n: number) {
@@ -36,11 +36,9 @@ export default function RouteMap({ day, tileUrl }: { day: RouteDay; tileUrl: str
         )}
         <Polyline positions={line} pathOptions={{ color: '#14213d', weight: 4, opacity: 0.8 }} />
         {day.stops.map((s, i) => (
-          <Marker key={s.venue.id} position={[s.venue.lat, s.venue.lng]} icon={numberIcon(i + 1)} title={`Stop ${i + 1}: ${s.venue.name}`}>
-            <Tooltip>
-              {i + 1}. {s.venue.name} · {s.arrival}
-            </Tooltip>
-          </Marker>
+          // Pictures, not controls: the stops list above says the same in words, and close stops' markers would
+          // otherwise be touch targets overlapping each other.
+          <Marker key={s.venue.id} position={[s.venue.lat, s.venue.lng]} icon={numberIcon(i + 1)} interactive={false} keyboard={false} />
         ))}
       </MapContainer>
       {!showTiles && (

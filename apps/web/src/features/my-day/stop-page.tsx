@@ -61,12 +61,17 @@ export function StopPage() {
   if (day.isLoading) return <Loading label="Loading the stop…" />;
   if (!day.data) return <ErrorState error={day.error} onRetry={() => day.refetch()} />;
   if (!found) {
+    // The office may have moved this stop off the day while the phone was offline: what was not sent (or needs a
+    // decision) still shows here.
     return (
-      <Empty title="This venue is not on your day">
-        <Link to={paths.myDay} className="link">
-          Back to My day
-        </Link>
-      </Empty>
+      <div className="mx-auto grid max-w-3xl gap-4">
+        <SyncStrip savedAt={day.dataUpdatedAt} timeZone={locale.timeZone} locale={locale.locale} />
+        <Empty title="This venue is not on your day">
+          <Link to={paths.myDay} className="link">
+            Back to My day
+          </Link>
+        </Empty>
+      </div>
     );
   }
   const { stop, number } = found;
