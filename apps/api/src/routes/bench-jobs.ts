@@ -1,20 +1,20 @@
 // Bench jobs: the list, opening one on a board, the job itself, saving its draft, finishing it, photos on its steps
 // and its sheet as PDF. Thin: parse, call the service, record the audit, return.
-import { Router, type RequestHandler } from 'express';
+import { Router } from 'express';
 import sharp from 'sharp';
 import { benchDraftSave, benchJobFinish, benchJobListQuery, benchJobOpen, benchPhotoFields } from '@bumperline/contracts/bench-jobs';
 import { recordAudit } from '@bumperline/db/queries/audit';
 import { getBenchJobPhoto, listBenchJobPhotos, listBenchJobs } from '@bumperline/db/queries/bench-jobs';
 import { getCompanyLocale } from '@bumperline/db/queries/companies';
-import { HttpError, NotFoundError, ValidationError } from '../http/errors.ts';
+import { NotFoundError } from '../http/errors.ts';
 import { parse } from '../http/validate.ts';
 import { idParam } from '../http/params.ts';
-import { requirePermission, type makeScoped } from '../http/guards.ts';
+import { type makeScoped } from '../http/guards.ts';
+import { takePhoto, takenPhoto } from '../http/photo-upload.ts';
 import { benchJobView } from '../services/bench-job-view.ts';
 import { finishBenchJob, openBenchJob, saveBenchDraft } from '../services/bench-jobs.ts';
 import { jobSheetPdf } from '../services/bench-job-sheet.ts';
 import { addBenchPhoto } from '../services/bench-photos.ts';
-import { multipartForm, PhotoRejected, preparePhoto, type PreparedPhoto } from '../services/photo-intake.ts';
 import type { PhotoStore } from '../services/photo-store.ts';
 import { pdfFileName } from '../services/pdf-sheet.ts';
 
@@ -33,30 +33,8 @@ function formatterFor(locale: string, timeZone: string): (iso: string) => string
 export function benchJobsRouter(deps: { scoped: ReturnType<typeof makeScoped>; photos: PhotoStore }): Router {
   const { scoped, photos } = deps;
   const r = Router();
-  const readPhotoForm = multipartForm({ fileField: 'photo', fieldLabels: { stepKey: 'The step' } });
-
-  /**
-   * A photo is read and prepared before the transaction opens (as on the report page): the role is checked first,
-   * so nobody without it gets to upload 10 MB; a refused photo stores nothing.
-   */
-  const takePhoto: RequestHandler = async (req, res, next) => {
-    requirePermission(req, 'bench:work');
-    const form = await readPhotoForm(req, res);
-    if (form.problem) {
-      const { status, field, message } = form.problem;
-      throw status === 413
-        ? new HttpError(413, 'Photo too large', message, [{ field, message }], 'too-large')
-        : new ValidationError([{ field, message }]);
-    }
-    if (!form.file || form.file.size === 0) throw new ValidationError([{ field: 'photo', message: 'choose a photo to add' }]);
-    try {
-      res.locals.benchPhoto = await preparePhoto(form.file.buffer);
-    } catch (err) {
-      if (err instanceof PhotoRejected) throw new ValidationError([{ field: 'photo', message: err.message }]);
-      throw err;
-    }
-    next();
-  };
+  // Read and prepared before the transaction opens, with the role checked first (http/photo-upload.ts).
+  const takeStepPhoto = takePhoto('bench:work', { stepKey: 'The step' });
 
   r.get(
     '/',
@@ -128,7 +106,7 @@ export function benchJobsRouter(deps: { scoped: ReturnType<typeof makeScoped>; p
 
   r.post(
     '/:id/photos',
-    takePhoto,
+    takeStepPhoto,
     scoped(
       'bench:work',
       async ({ tx, req, res, actor }) => {
@@ -139,7 +117,7 @@ export function benchJobsRouter(deps: { scoped: ReturnType<typeof makeScoped>; p
           const photo = await addBenchPhoto(tx, photos, {
             jobId: id,
             stepKey,
-            photo: res.locals.benchPhoto as PreparedPhoto,
+            photo: takenPhoto(res),
             uploadedBy: actor.userId,
             written,
           });
